@@ -1,0 +1,23 @@
+// SPDX-License-Identifier: MIT
+#pragma once
+// The subcommands of `rackreach`, one file each. Each adds itself to the app and sets `exit_code` when run.
+
+#include <CLI/CLI.hpp>
+#include <string>
+#include <vector>
+
+#include "engine/io/problem.hpp"
+
+namespace rackreach::cli {
+
+/// Exit codes of PRODUCT.md: 0 done; 1 invalid input; 2 usage; 3 --fail-above exceeded.
+enum ExitCode : int { exit_ok = 0, exit_invalid_input = 1, exit_usage = 2, exit_fail_above = 3 };
+
+void add_assess_command(CLI::App& app, int& exit_code);
+void add_check_command(CLI::App& app, int& exit_code);
+void add_template_command(CLI::App& app, int& exit_code);
+
+/// Prints every problem to stderr, one per line, naming the file.
+void print_problems(const std::string& file, const std::vector<Problem>& problems);
+
+}  // namespace rackreach::cli

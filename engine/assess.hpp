@@ -1,0 +1,46 @@
+// SPDX-License-Identifier: MIT
+#pragma once
+// One entry point for an assessment: the CLI and the desktop app call assess_project() on one project model.
+
+#include <optional>
+#include <string>
+#include <vector>
+
+#include "engine/lifting/composite.hpp"
+#include "engine/lifting/duration.hpp"
+#include "engine/lifting/risk_bands.hpp"
+#include "engine/lifting/rnle_1994.hpp"
+#include "engine/project.hpp"
+
+namespace rackreach {
+
+struct AssessOptions {
+  RoundingMode rounding = RoundingMode::full;
+  std::optional<DurationRule> duration_rule;  ///< overrides the project's rule when set
+  RiskBands bands;
+};
+
+struct JobAssessment {
+  std::string id;
+  bool duration_declared = false;  ///< category given in the file (true) or derived from the pattern
+  DurationAssessment duration;
+  std::vector<TaskResult> tasks;
+  std::optional<CompositeResult> composite;  ///< for jobs of two or more tasks
+  std::vector<Warning> warnings;             ///< job-level: duration, composite flags
+
+  /// The job's index: its CLI for a multi-task job, the task's LI otherwise.
+  std::optional<double> job_index() const;
+};
+
+struct ProjectAssessment {
+  UnitSystem units = UnitSystem::metric;
+  RoundingMode rounding = RoundingMode::full;
+  DurationRule duration_rule = DurationRule::edition_2021;
+  RiskBands bands;
+  std::vector<JobAssessment> jobs;
+};
+
+JobAssessment assess_job(const LiftJob& job, UnitSystem units, DurationRule rule, RoundingMode mode);
+ProjectAssessment assess_project(const Project& project, const AssessOptions& options);
+
+}  // namespace rackreach

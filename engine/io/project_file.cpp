@@ -1,0 +1,355 @@
+// SPDX-License-Identifier: MIT
+#include "engine/io/project_file.hpp"
+
+#include <fstream>
+#include <nlohmann/json.hpp>
+#include <set>
+#include <sstream>
+
+#include "engine/io/json_reader.hpp"
+
+namespace rackreach {
+namespace {
+
+using nlohmann::json;
+
+/// Finds the JSON path at which a parse failed, by parsing again with a callback that follows the path.
+/// Only run after a failure, so a good file is parsed once, at full speed.
+std::string find_parse_error_path(std::string_view text) {
+  struct Level {
+    bool is_array;
+    std::size_t index;
+    std::string key;
+    bool has_key;
+  };
+  std::vector<Level> stack;
+  auto on_value_done = [&] {
+    if (!stack.empty() && stack.back().is_array) ++stack.back().index;
+    if (!stack.empty() && !stack.back().is_array) stack.back().has_key = false;
+  };
+  auto cb = [&](int /*depth*/, json::parse_event_t ev, json& parsed) {
+    switch (ev) {
+      case json::parse_event_t::object_start: stack.push_back({false, 0, {}, false}); break;
+      case json::parse_event_t::array_start: stack.push_back({true, 0, {}, false}); break;
+      case json::parse_event_t::key:
+        stack.back().key = parsed.get<std::string>();
+        stack.back().has_key = true;
+        break;
+      case json::parse_event_t::object_end:
+      case json::parse_event_t::array_end:
+        stack.pop_back();
+        on_value_done();
+        break;
+      case json::parse_event_t::value: on_value_done(); break;
+    }
+    return true;
+  };
+  try {
+    const json partial = json::parse(text.begin(), text.end(), cb);
+    (void)partial;
+  } catch (const json::exception&) {
+  }
+  std::string path;
+  for (const Level& l : stack) {
+    if (l.is_array) path += "[" + std::to_string(l.index) + "]";
+    else if (l.has_key) path += (path.empty() ? "" : ".") + l.key;
+  }
+  return path;
+}
+
+std::string line_and_column(std::string_view text, std::size_t byte) {
+  std::size_t line = 1, col = 1;
+  for (std::size_t i = 0; i < byte && i < text.size(); ++i) {
+    if (text[i] == '\n') {
+      ++line;
+      col = 1;
+    } else {
+      ++col;
+    }
+  }
+  return "line " + std::to_string(line) + ", column " + std::to_string(col);
+}
+
+class ProjectLoader {
+ public:
+  explicit ProjectLoader(std::vector<Problem>& problems) : r_(problems), problems_(problems) {}
+
+  std::optional<Project> load(const json& doc) {
+    const JsonPath root;
+    if (!r_.object(doc, root,
+                   {"rackreach", "units", "title", "site", "assessor", "date", "duration_rule", "jobs"}))
+      return std::nullopt;
+    Project p;
+    if (const json* v = r_.member(doc, root, "rackreach", true)) {
+      if (!v->is_number_integer() || v->get<long long>() != project_format_version)
+        r_.add(v->is_number_integer() ? "invalid_value" : "wrong_type", JsonPath(root, "rackreach"), v,
+               "must be the format version 1 (the only version this build reads)");
+    }
+    const auto units = r_.choice(doc, root, "units", true, {"metric", "us"});
+    if (units) p.units = *units == "metric" ? UnitSystem::metric : UnitSystem::us;
+    units_ = p.units;
+    p.info.title = r_.string(doc, root, "title", false);
+    p.info.site = r_.string(doc, root, "site", false);
+    p.info.assessor = r_.string(doc, root, "assessor", false);
+    p.info.date = read_date(doc, root);
+    if (auto rule = r_.choice(doc, root, "duration_rule", false, {"2021", "1994"}))
+      p.duration_rule = *find_duration_rule(*rule);
+
+    if (const json* jobs = r_.member(doc, root, "jobs", true)) {
+      const JsonPath jobs_path(root, "jobs");
+      if (r_.array(*jobs, jobs_path, 1, "jobs")) {
+        std::set<std::string> ids;
+        p.jobs.reserve(jobs->size());
+        for (std::size_t i = 0; i < jobs->size(); ++i) {
+          const JsonPath job_path(jobs_path, i);
+          if (auto job = load_job((*jobs)[i], job_path)) {
+            if (!ids.insert(job->id).second)
+              problems_.push_back({"duplicate_id", JsonPath(job_path, "id").str(), "\"" + job->id + "\"",
+                                   "job ids must be unique in the file", ""});
+            p.jobs.push_back(std::move(*job));
+          }
+        }
+      }
+    }
+    if (!problems_.empty()) return std::nullopt;
+    return p;
+  }
+
+ private:
+  std::optional<std::string> read_date(const json& doc, const JsonPath& root) {
+    auto d = r_.string(doc, root, "date", false);
+    if (!d) return d;
+    const bool shape = d->size() == 10 && (*d)[4] == '-' && (*d)[7] == '-';
+    bool digits = shape;
+    for (std::size_t i = 0; shape && i < 10; ++i)
+      if (i != 4 && i != 7) digits = digits && (*d)[i] >= '0' && (*d)[i] <= '9';
+    const int month = digits ? std::stoi(d->substr(5, 2)) : 0;
+    const int day = digits ? std::stoi(d->substr(8, 2)) : 0;
+    if (!digits || month < 1 || month > 12 || day < 1 || day > 31) {
+      r_.add("invalid_value", JsonPath(root, "date"), r_.member(doc, root, "date", false),
+             "must be a calendar date written YYYY-MM-DD");
+      return std::nullopt;
+    }
+    return d;
+  }
+
+  std::optional<LiftJob> load_job(const json& j, const JsonPath& path) {
+    r_.set_context("");
+    if (!r_.object(j, path, {"id", "name", "duration", "work_pattern", "tasks"})) return std::nullopt;
+    LiftJob job;
+    const std::size_t before = problems_.size();
+    job.id = r_.string(j, path, "id", true).value_or("");
+    r_.set_context(job.id.empty() ? "" : "job \"" + job.id + "\"");
+    job.name = r_.string(j, path, "name", false);
+    const json* duration = r_.member(j, path, "duration", false);
+    const json* pattern = r_.member(j, path, "work_pattern", false);
+    if (duration && pattern) {
+      r_.add("invalid_value", JsonPath(path, "work_pattern"), nullptr,
+             "give either duration or work_pattern, not both");
+    } else if (!duration && !pattern) {
+      r_.add("missing_key", JsonPath(path, "duration"), nullptr,
+             "is required (\"short\", \"moderate\" or \"long\"), unless a work_pattern is given");
+    } else if (duration) {
+      if (auto d = r_.choice(j, path, "duration", true, {"short", "moderate", "long"}))
+        job.declared_duration = find_duration(*d);
+    } else {
+      load_pattern(*pattern, JsonPath(path, "work_pattern"), job);
+    }
+    if (const json* tasks = r_.member(j, path, "tasks", true)) {
+      const JsonPath tasks_path(path, "tasks");
+      if (r_.array(*tasks, tasks_path, 1, "tasks")) {
+        std::set<std::string> ids;
+        job.tasks.reserve(tasks->size());
+        job.frequency_samples.reserve(tasks->size());
+        const std::string job_context = r_.context();
+        for (std::size_t i = 0; i < tasks->size(); ++i) {
+          const JsonPath task_path(tasks_path, i);
+          const std::size_t loaded = job.tasks.size();
+          load_task((*tasks)[i], task_path, job);
+          if (job.tasks.size() > loaded && !ids.insert(job.tasks.back().id).second)
+            problems_.push_back({"duplicate_id", JsonPath(task_path, "id").str(), "\"" + job.tasks.back().id + "\"",
+                                 "task ids must be unique within a job", job_context});
+          r_.set_context(job_context);
+        }
+      }
+    }
+    r_.set_context("");
+    if (problems_.size() != before) return std::nullopt;
+    return job;
+  }
+
+  void load_pattern(const json& j, const JsonPath& path, LiftJob& job) {
+    if (!r_.array(j, path, 1, "periods")) return;
+    for (std::size_t i = 0; i < j.size(); ++i) {
+      const JsonPath p(path, i);
+      if (!r_.object(j[i], p, {"lifting_min", "recovery_min"})) continue;
+      const bool lifting = j[i].contains("lifting_min");
+      if (lifting == j[i].contains("recovery_min")) {
+        r_.add("invalid_value", p, &j[i], "each period gives exactly one of lifting_min or recovery_min");
+        continue;
+      }
+      const NumberRule minutes{0.0, 24.0 * 60.0, true, false, "min"};
+      if (auto m = r_.number(j[i], p, lifting ? "lifting_min" : "recovery_min", true, minutes))
+        job.work_pattern.push_back({lifting ? WorkPeriod::Kind::lifting : WorkPeriod::Kind::recovery, *m});
+    }
+  }
+
+  std::optional<LiftPoint> load_point(const json& task, const JsonPath& task_path, std::string_view key) {
+    const json* j = r_.member(task, task_path, key, true);
+    if (!j) return std::nullopt;
+    const JsonPath path(task_path, key);
+    if (!r_.object(*j, path, {"h", "v", "a"})) return std::nullopt;
+    const std::string_view len = length_unit(units_);
+    auto h = r_.number(*j, path, "h", true, {0.0, std::nullopt, true, false, len});
+    auto v = r_.number(*j, path, "v", true, {0.0, std::nullopt, false, false, len});
+    auto a = r_.number(*j, path, "a", false, {0.0, 180.0, false, false, "deg (an angle magnitude)"});
+    if (!h || !v || (j->contains("a") && !a)) return std::nullopt;
+    return LiftPoint{*h, *v, a.value_or(0.0)};
+  }
+
+  void load_limits(const json& j, const JsonPath& path, LimitsOfApplication& l) {
+    if (!r_.object(j, path,
+                   {"one_handed", "seated_or_kneeling", "restricted_space", "unstable_load", "wheelbarrow_or_shovel",
+                    "high_speed", "carry_push_share", "floor_friction", "temperature_c", "humidity_pct"}))
+      return;
+    l.one_handed = r_.boolean(j, path, "one_handed", false);
+    l.seated_or_kneeling = r_.boolean(j, path, "seated_or_kneeling", false);
+    l.restricted_space = r_.boolean(j, path, "restricted_space", false);
+    l.unstable_load = r_.boolean(j, path, "unstable_load", false);
+    l.wheelbarrow_or_shovel = r_.boolean(j, path, "wheelbarrow_or_shovel", false);
+    l.high_speed = r_.boolean(j, path, "high_speed", false);
+    l.carry_push_share = r_.number(j, path, "carry_push_share", false, {0.0, 1.0, false, false, "(fraction of the work)"});
+    l.floor_friction = r_.number(j, path, "floor_friction", false, {0.0, 2.0, false, false, "(coefficient)"});
+    l.temperature_c = r_.number(j, path, "temperature_c", false, {-60.0, 70.0, false, false, "C"});
+    l.humidity_pct = r_.number(j, path, "humidity_pct", false, {0.0, 100.0, false, false, "%"});
+  }
+
+  void load_task(const json& j, const JsonPath& path, LiftJob& job) {
+    const std::string job_context = r_.context();
+    if (!r_.object(j, path,
+                   {"id", "load", "max_load", "frequency", "frequency_sample", "coupling", "origin", "destination",
+                    "control_at_destination", "limits"}))
+      return;
+    const std::size_t before = problems_.size();
+    LiftTask t;
+    t.id = r_.string(j, path, "id", true).value_or("");
+    if (!t.id.empty()) r_.set_context(job_context + (job_context.empty() ? "" : ", ") + "task \"" + t.id + "\"");
+    const std::string_view mass = mass_unit(units_);
+    t.load = r_.number(j, path, "load", true, {0.0, std::nullopt, true, false, mass}).value_or(0.0);
+    t.max_load = r_.number(j, path, "max_load", false, {0.0, std::nullopt, true, false, mass});
+    if (t.max_load && t.load > 0.0 && *t.max_load < t.load)
+      r_.add("out_of_range", JsonPath(path, "max_load"), r_.member(j, path, "max_load", false),
+             "must be at least the load (" + json(t.load).dump() + " " + std::string(mass) + ")");
+    std::optional<FrequencySample> sample;
+    const json* freq = r_.member(j, path, "frequency", false);
+    const json* freq_sample = r_.member(j, path, "frequency_sample", false);
+    if (freq && freq_sample) {
+      r_.add("invalid_value", JsonPath(path, "frequency_sample"), nullptr,
+             "give either frequency or frequency_sample, not both");
+    } else if (freq_sample) {
+      sample = load_frequency_sample(*freq_sample, JsonPath(path, "frequency_sample"));
+      if (sample) t.frequency_per_min = calc_sampled_frequency(sample->lifts_per_min, sample->lifting_min, sample->sample_min);
+    } else {
+      t.frequency_per_min =
+          r_.number(j, path, "frequency", true, {0.0, std::nullopt, true, false, "lifts/min"}).value_or(0.0);
+    }
+    if (auto c = r_.choice(j, path, "coupling", true, {"good", "fair", "poor"})) t.coupling = *find_coupling(*c);
+    if (auto o = load_point(j, path, "origin")) t.origin = *o;
+    if (auto d = load_point(j, path, "destination")) t.destination = *d;
+    t.control_at_destination = r_.boolean(j, path, "control_at_destination", false).value_or(false);
+    if (const json* l = r_.member(j, path, "limits", false)) load_limits(*l, JsonPath(path, "limits"), t.limits);
+    r_.set_context(job_context);
+    if (problems_.size() != before) return;
+    job.tasks.push_back(std::move(t));
+    job.frequency_samples.push_back(sample);
+  }
+
+  std::optional<FrequencySample> load_frequency_sample(const json& j, const JsonPath& path) {
+    if (!r_.object(j, path, {"lifts_per_min", "lifting_min", "sample_min"})) return std::nullopt;
+    auto rate = r_.number(j, path, "lifts_per_min", true, {0.0, std::nullopt, true, false, "lifts/min"});
+    auto lifting = r_.number(j, path, "lifting_min", true, {0.0, std::nullopt, true, false, "min"});
+    auto sample = r_.number(j, path, "sample_min", false, {0.0, std::nullopt, true, false, "min"});
+    const double sample_min = sample.value_or(frequency_sample_min);
+    if (!rate || !lifting || (j.contains("sample_min") && !sample)) return std::nullopt;
+    if (*lifting > sample_min) {
+      r_.add("out_of_range", JsonPath(path, "lifting_min"), &j.at("lifting_min"),
+             "must be at most the sample period (" + json(sample_min).dump() + " min)");
+      return std::nullopt;
+    }
+    return FrequencySample{*rate, *lifting, sample_min};
+  }
+
+  JsonReader r_;
+  std::vector<Problem>& problems_;
+  UnitSystem units_ = UnitSystem::metric;
+};
+
+}  // namespace
+
+LoadResult load_project_text(std::string_view text) {
+  LoadResult out;
+  json doc;
+  try {
+    doc = json::parse(text.begin(), text.end());
+  } catch (const json::parse_error& e) {
+    // nlohmann's message starts "[json.exception.parse_error.101] parse error at line 3, column 7: ..."
+    std::string what = e.what();
+    const auto colon = what.find("] ");
+    if (colon != std::string::npos) what = what.substr(colon + 2);
+    const auto detail = what.find(": ");  // drop nlohmann's own "parse error at line L, column C" prefix
+    if (what.rfind("parse error", 0) == 0 && detail != std::string::npos) what = what.substr(detail + 2);
+    out.problems.push_back({"parse_error", find_parse_error_path(text), "",
+                            "the file is not valid JSON (" + line_and_column(text, e.byte ? e.byte - 1 : 0) + "): " +
+                                what,
+                            ""});
+    return out;
+  }
+  ProjectLoader loader(out.problems);
+  out.project = loader.load(doc);
+  return out;
+}
+
+LoadResult load_project_file(const std::string& path) {
+  std::ifstream in(path, std::ios::binary);
+  if (!in) return {std::nullopt, {{"file_error", "", "", "cannot open the file for reading", ""}}};
+  std::ostringstream ss;
+  ss << in.rdbuf();
+  if (in.bad()) return {std::nullopt, {{"file_error", "", "", "cannot read the file", ""}}};
+  return load_project_text(ss.str());
+}
+
+std::string make_template(UnitSystem units) {
+  using ojson = nlohmann::ordered_json;  // keeps the keys in the order written, for a readable starter file
+  const bool metric = units == UnitSystem::metric;
+  auto point = [](double h, double v, double a) { return ojson{{"h", h}, {"v", v}, {"a", a}}; };
+  ojson task1 = {{"id", "T1"},
+                 {"load", metric ? 8.0 : 18.0},
+                 {"frequency", 2.0},
+                 {"coupling", "fair"},
+                 {"origin", point(metric ? 40 : 16, metric ? 60 : 24, 0)},
+                 {"destination", point(metric ? 45 : 18, metric ? 90 : 36, 30)},
+                 {"control_at_destination", false}};
+  ojson task2 = {{"id", "T2"},
+                 {"load", metric ? 4.0 : 9.0},
+                 {"frequency", 1.0},
+                 {"coupling", "good"},
+                 {"origin", point(metric ? 50 : 20, metric ? 150 : 60, 0)},
+                 {"destination", point(metric ? 45 : 18, metric ? 90 : 36, 0)},
+                 {"control_at_destination", true},
+                 {"limits", {{"one_handed", false}, {"floor_friction", 0.5}, {"temperature_c", 21}}}};
+  ojson job = {{"id", "J1"},
+               {"name", "Example job: two picks to a cart"},
+               {"work_pattern", ojson::array({{{"lifting_min", 50}}, {{"recovery_min", 60}}, {{"lifting_min", 50}}})},
+               {"tasks", ojson::array({task1, task2})}};
+  ojson t = {{"rackreach", project_format_version},
+             {"units", std::string(unit_system_name(units))},
+             {"title", "New assessment"},
+             {"site", "Kitting store"},
+             {"assessor", "Your name"},
+             {"date", "2026-01-15"},
+             {"duration_rule", "2021"},
+             {"jobs", ojson::array({job})}};
+  return t.dump(2) + "\n";
+}
+
+}  // namespace rackreach

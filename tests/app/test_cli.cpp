@@ -1,0 +1,189 @@
+// SPDX-License-Identifier: MIT
+// The command line end to end: the published cases through the loader and the CLI's JSON output, every sample
+// with empty stderr, every invalid fixture with exit 1 and nothing written, exit codes.
+
+#include <sys/wait.h>
+
+#include <catch2/catch.hpp>
+#include <cstdio>
+#include <cstdlib>
+#include <filesystem>
+#include <nlohmann/json.hpp>
+#include <string>
+
+#include "tests/shared_reference.hpp"
+
+namespace fs = std::filesystem;
+using nlohmann::json;
+
+namespace {
+
+struct Run {
+  int exit_code = -1;
+  std::string out;
+  std::string err;
+};
+
+std::string quote(const std::string& s) {
+  std::string q = "'";
+  for (char c : s) q += c == '\'' ? std::string("'\\''") : std::string(1, c);
+  return q + "'";
+}
+
+Run run_cli(const std::string& args) {
+  static int counter = 0;
+  const fs::path dir = fs::temp_directory_path() / ("rackreach-cli-test-" + std::to_string(::getpid()));
+  fs::create_directories(dir);
+  const std::string out = (dir / ("out" + std::to_string(counter) + ".txt")).string();
+  const std::string err = (dir / ("err" + std::to_string(counter++) + ".txt")).string();
+  const std::string cmd = quote(RACKREACH_CLI) + " " + args + " >" + quote(out) + " 2>" + quote(err);
+  const int status = std::system(cmd.c_str());
+  Run r;
+  r.exit_code = WIFEXITED(status) ? WEXITSTATUS(status) : -1;
+  r.out = shared_reference::read_text(out).value_or("");
+  r.err = shared_reference::read_text(err).value_or("");
+  return r;
+}
+
+/// Compares the engine's JSON for one end of a task with an expected block at a tolerance.
+void check_point(const json& actual, const json& expected, double rel_tol, double abs_tol, const std::string& where) {
+  for (auto it = expected.begin(); it != expected.end(); ++it) {
+    INFO(where << "." << it.key() << ": expected " << it.value() << ", got " << actual.value(it.key(), json()));
+    REQUIRE(actual.contains(it.key()));
+    REQUIRE(actual[it.key()].is_number());
+    const double e = it.value().get<double>();
+    const double a = actual[it.key()].get<double>();
+    CHECK(std::abs(a - e) <= std::max(abs_tol, rel_tol * std::abs(e)));
+  }
+}
+
+}  // namespace
+
+TEST_CASE("Published cases through the CLI's JSON output, worksheet and full", "[cli][cases]") {
+  // Sources per case in ../shared/reference/cases/*.expected.json: [HB06] 46.7.2 (dish-washing, US units) and the
+  // metric package-inspection exercise. Worksheet values at printed precision; full values to 1e-3 relative.
+  for (const char* name : {"handbook-dishwashing", "metric-package-inspection"}) {
+    const std::string input = shared_reference::path(std::string("reference/cases/") + name + ".input.json");
+    const auto expected_text =
+        shared_reference::read_text(shared_reference::path(std::string("reference/cases/") + name + ".expected.json"));
+    if (!expected_text) {
+      WARN("published case " << name << " not found in ../shared: skipped, not passed");
+      continue;
+    }
+    const json expected = json::parse(*expected_text);
+    for (const char* mode : {"worksheet", "full"}) {
+      const Run r = run_cli("assess " + quote(input) + " --format json --rounding " + mode);
+      INFO(name << " " << mode << " stderr: " << r.err);
+      REQUIRE(r.exit_code == 0);
+      CHECK(r.err.empty());
+      const json out = json::parse(r.out);
+      CHECK(out["units"]["system"] == expected["units"]);
+      CHECK(out["rounding"] == mode);
+      for (const auto& ejob : expected["jobs"]) {
+        const json* ajob = nullptr;
+        for (const auto& j : out["jobs"])
+          if (j["id"] == ejob["id"]) ajob = &j;
+        REQUIRE(ajob);
+        for (const auto& etask : ejob["tasks"]) {
+          const json* atask = nullptr;
+          for (const auto& t : (*ajob)["tasks"])
+            if (t["id"] == etask["id"]) atask = &t;
+          REQUIRE(atask);
+          CHECK((*atask)["governing"] == etask["governing"]);
+          const json& block = etask[mode];
+          const bool ws = std::string(mode) == "worksheet";
+          for (const char* end : {"origin", "destination"})
+            if (block.contains(end))
+              check_point((*atask)[end], block[end], ws ? 0.0 : 1e-3, ws ? 1e-9 : 0.0,
+                          std::string(name) + "." + mode + "." + end);
+        }
+      }
+    }
+  }
+}
+
+TEST_CASE("Every sample runs cleanly: readable table and valid JSON, empty stderr", "[cli][samples]") {
+  const fs::path dir = shared_reference::repo_path("sample_tasks");
+  int count = 0;
+  for (const auto& entry : fs::directory_iterator(dir)) {
+    if (entry.path().extension() != ".json") continue;
+    ++count;
+    const std::string file = quote(entry.path().string());
+    INFO(entry.path().filename().string());
+    const Run table = run_cli("assess " + file);
+    CHECK(table.exit_code == 0);
+    CHECK(table.err.empty());
+    CHECK_THAT(table.out, Catch::Matchers::Contains("Caution: Results screen lifting"));
+    const Run js = run_cli("assess " + file + " --format json");
+    CHECK(js.exit_code == 0);
+    CHECK(js.err.empty());
+    const json out = json::parse(js.out);
+    CHECK(out["engine"]["version"].is_string());
+    CHECK(out["units"]["length"].is_string());
+    for (const auto& job : out["jobs"])
+      for (const auto& task : job["tasks"]) {
+        CHECK((task["li"].is_null() || task["li"].is_number()));
+        CHECK((task["li"].is_null() == task["outside_equation"].get<bool>()));
+      }
+    const Run csv = run_cli("assess " + file + " --format csv");
+    CHECK(csv.exit_code == 0);
+    CHECK(csv.err.empty());
+    const Run check = run_cli("check " + file);
+    CHECK(check.exit_code == 0);
+  }
+  CHECK(count >= 3);
+}
+
+TEST_CASE("Invalid input: exit 1, the JSON path named, nothing written to --out", "[cli][invalid]") {
+  const fs::path dir = shared_reference::repo_path("tests/data");
+  int count = 0;
+  for (const auto& entry : fs::directory_iterator(dir)) {
+    const std::string stem = entry.path().stem().string();
+    if (stem.rfind("invalid_", 0) != 0) continue;
+    ++count;
+    INFO(stem);
+    const fs::path out = fs::temp_directory_path() / ("rackreach-should-not-exist-" + stem + ".json");
+    fs::remove(out);
+    const Run r = run_cli("assess " + quote(entry.path().string()) + " --format json --out " + quote(out.string()));
+    CHECK(r.exit_code == 1);
+    CHECK_THAT(r.err, Catch::Matchers::Contains(entry.path().string()));
+    CHECK_THAT(r.err, Catch::Matchers::Contains("["));  // every message carries its problem code
+    CHECK_FALSE(fs::exists(out));
+    CHECK(r.out.empty());
+  }
+  CHECK(count >= 15);
+}
+
+TEST_CASE("Exit codes: usage 2, --fail-above 3, --version, template round trip", "[cli][exit]") {
+  CHECK(run_cli("").exit_code == 2);
+  CHECK(run_cli("assess").exit_code == 2);
+  CHECK(run_cli("assess x.json --format yaml").exit_code == 2);
+  const Run v = run_cli("--version");
+  CHECK(v.exit_code == 0);
+  CHECK_THAT(v.out, Catch::Matchers::StartsWith("rackreach "));
+  const std::string sample = quote(shared_reference::repo_path("sample_tasks/kit-cart-loading.rackreach.json"));
+  CHECK(run_cli("assess " + sample + " --fail-above 5").exit_code == 0);
+  const Run over = run_cli("assess " + sample + " --fail-above 1.0");
+  CHECK(over.exit_code == 3);
+  CHECK_THAT(over.err, Catch::Matchers::Contains("impeller-floor"));
+  // An unreadable file is invalid input, named.
+  const Run missing = run_cli("assess /nonexistent/x.rackreach.json");
+  CHECK(missing.exit_code == 1);
+  CHECK_THAT(missing.err, Catch::Matchers::Contains("/nonexistent/x.rackreach.json"));
+  // --out writes the same text as standard output.
+  const fs::path out = fs::temp_directory_path() / "rackreach-cli-out.json";
+  fs::remove(out);
+  CHECK(run_cli("assess " + sample + " --format json --out " + quote(out.string())).exit_code == 0);
+  CHECK(shared_reference::read_text(out.string()) == run_cli("assess " + sample + " --format json").out);
+  for (const char* units : {"metric", "us"}) {
+    const Run t = run_cli(std::string("template --units ") + units);
+    REQUIRE(t.exit_code == 0);
+    const fs::path tf = fs::temp_directory_path() / (std::string("rackreach-template-") + units + ".json");
+    {
+      std::FILE* f = std::fopen(tf.c_str(), "w");
+      std::fputs(t.out.c_str(), f);
+      std::fclose(f);
+    }
+    CHECK(run_cli("check " + quote(tf.string())).exit_code == 0);
+  }
+}

@@ -1,0 +1,128 @@
+// SPDX-License-Identifier: MIT
+// The project file loader: the published cases load, and every invalid fixture (named after what is wrong)
+// gives the expected problem code at the expected JSON path.
+
+#include <catch2/catch.hpp>
+#include <string>
+
+#include "engine/io/assessment_output.hpp"
+#include "engine/io/project_file.hpp"
+#include "tests/shared_reference.hpp"
+
+using namespace rackreach;
+
+namespace {
+
+struct Expected {
+  const char* fixture;
+  const char* code;
+  const char* path;
+};
+
+const Expected invalid_fixtures[] = {
+    {"invalid_missing_units", "missing_key", "units"},
+    {"invalid_unknown_units", "invalid_value", "units"},
+    {"invalid_unknown_key", "unknown_key", "jobs[0].tasks[0].frequncy"},
+    {"invalid_negative_load", "out_of_range", "jobs[0].tasks[0].load"},
+    {"invalid_h_as_string", "wrong_type", "jobs[0].tasks[0].origin.h"},
+    {"invalid_nan_value", "parse_error", "jobs[0].tasks[0].origin.h"},
+    {"invalid_empty_jobs", "empty", "jobs"},
+    {"invalid_duplicate_task_ids", "duplicate_id", "jobs[0].tasks[1].id"},
+    {"invalid_frequency_zero", "out_of_range", "jobs[0].tasks[0].frequency"},
+    {"invalid_a_negative", "out_of_range", "jobs[0].tasks[0].origin.a"},
+    {"invalid_missing_format_version", "missing_key", "rackreach"},
+    {"invalid_wrong_format_version", "invalid_value", "rackreach"},
+    {"invalid_unknown_coupling", "invalid_value", "jobs[0].tasks[0].coupling"},
+    {"invalid_missing_destination", "missing_key", "jobs[0].tasks[0].destination"},
+    {"invalid_v_negative", "out_of_range", "jobs[0].tasks[0].destination.v"},
+    {"invalid_missing_duration", "missing_key", "jobs[0].duration"},
+    {"invalid_duration_and_pattern", "invalid_value", "jobs[0].work_pattern"},
+    {"invalid_duplicate_job_ids", "duplicate_id", "jobs[1].id"},
+    {"invalid_empty_tasks", "empty", "jobs[0].tasks"},
+    {"invalid_max_load_below_load", "out_of_range", "jobs[0].tasks[0].max_load"},
+    {"invalid_control_not_boolean", "wrong_type", "jobs[0].tasks[0].control_at_destination"},
+    {"invalid_bad_date", "invalid_value", "date"},
+    {"invalid_limits_unknown_key", "unknown_key", "jobs[0].tasks[0].limits.one_hand"},
+    {"invalid_pattern_period_both", "invalid_value", "jobs[0].work_pattern[0]"},
+    {"invalid_frequency_and_sample", "invalid_value", "jobs[0].tasks[0].frequency_sample"},
+    {"invalid_not_json", "parse_error", "jobs[0]"},
+    {"invalid_top_level_array", "wrong_type", ""},
+    {"invalid_h_zero", "out_of_range", "jobs[0].tasks[0].origin.h"},
+};
+
+}  // namespace
+
+TEST_CASE("Every invalid fixture gives its problem code at its JSON path", "[io][invalid]") {
+  for (const Expected& e : invalid_fixtures) {
+    const std::string file = shared_reference::repo_path(std::string("tests/data/") + e.fixture + ".json");
+    const LoadResult r = load_project_file(file);
+    INFO(e.fixture);
+    CHECK_FALSE(r.project.has_value());
+    bool found = false;
+    std::string all;
+    for (const Problem& p : r.problems) {
+      found = found || (p.code == e.code && p.path == e.path);
+      all += format_problem(e.fixture, p) + "\n";
+    }
+    INFO("problems:\n" << all);
+    CHECK(found);
+  }
+}
+
+TEST_CASE("All problems come at once, each naming path, value and rule", "[io][invalid]") {
+  const LoadResult r = load_project_text(R"({"rackreach": 1, "units": "metric", "jobs": [{"id": "J", "duration": "short",
+    "tasks": [{"id": "T", "load": -1, "frequency": 0, "coupling": "good",
+               "origin": {"h": "far", "v": 50}, "destination": {"h": 30, "v": 60, "b": 1}}]}]})");
+  REQUIRE_FALSE(r.project);
+  REQUIRE(r.problems.size() == 4);
+  const std::string msg = format_problem("x.json", r.problems[0]);
+  CHECK(msg == "x.json: jobs[0].tasks[0].load (job \"J\", task \"T\"): must be a number greater than 0 kg; it is -1 "
+               "[out_of_range]");
+  CHECK(format_problem("x.json", r.problems[2]) ==
+        "x.json: jobs[0].tasks[0].origin.h (job \"J\", task \"T\"): must be a number greater than 0 cm; found a "
+        "string; it is \"far\" [wrong_type]");
+  CHECK(r.problems[3].code == "unknown_key");
+  CHECK(r.problems[3].path == "jobs[0].tasks[0].destination.b");
+}
+
+TEST_CASE("The published cases load through the project-file contract", "[io][cases]") {
+  for (const char* name : {"handbook-dishwashing", "metric-package-inspection"}) {
+    const std::string file = shared_reference::path(std::string("reference/cases/") + name + ".input.json");
+    if (!shared_reference::read_text(file)) {
+      WARN(file << " not found: published case skipped (not passed)");
+      continue;
+    }
+    const LoadResult r = load_project_file(file);
+    INFO(name);
+    for (const auto& p : r.problems) INFO(format_problem(name, p));
+    CHECK(r.project.has_value());
+  }
+}
+
+TEST_CASE("The template loads and is valid in both unit systems", "[io][template]") {
+  for (UnitSystem u : {UnitSystem::metric, UnitSystem::us}) {
+    const LoadResult r = load_project_text(make_template(u));
+    for (const auto& p : r.problems) INFO(format_problem("template", p));
+    REQUIRE(r.project);
+    CHECK(r.project->units == u);
+  }
+}
+
+TEST_CASE("A frequency sample gives F by the special adjustment", "[io][frequency]") {
+  // Applications Manual 1.3.5.5: 10 lifts/min for 8 min of a 15-min sample -> 5.33 lifts/min.
+  const LoadResult r = load_project_text(R"({"rackreach": 1, "units": "metric", "jobs": [{"id": "J", "duration": "short",
+    "tasks": [{"id": "T", "load": 5, "frequency_sample": {"lifts_per_min": 10, "lifting_min": 8}, "coupling": "good",
+               "origin": {"h": 30, "v": 50}, "destination": {"h": 30, "v": 60}}]}]})");
+  REQUIRE(r.project);
+  CHECK(r.project->jobs[0].tasks[0].frequency_per_min == Approx(80.0 / 15.0));
+}
+
+TEST_CASE("CSV cells a spreadsheet would run as formulas are neutralised", "[io][csv]") {
+  // common practice: cells starting with = + - @ are prefixed so that spreadsheets show them as text.
+  CHECK(csv_cell("=SUM(A1)") == "'=SUM(A1)");
+  CHECK(csv_cell("@cmd") == "'@cmd");
+  CHECK(csv_cell("+1+2") == "'+1+2");
+  CHECK(csv_cell("-12.5") == "-12.5");  // a plain number stays a number
+  CHECK(csv_cell("a,b") == "\"a,b\"");
+  CHECK(csv_cell("say \"hi\"") == "\"say \"\"hi\"\"\"");
+}
