@@ -5,6 +5,7 @@
 #include <iostream>
 
 #include "app/cli/commands.hpp"
+#include "app/cli/population_cmd.hpp"
 #include "engine/version.hpp"
 
 int main(int argc, char** argv) {
@@ -17,6 +18,7 @@ int main(int argc, char** argv) {
   rackreach::cli::add_assess_command(app, exit_code);
   rackreach::cli::add_check_command(app, exit_code);
   rackreach::cli::add_template_command(app, exit_code);
+  rackreach::cli::add_population_command(app, exit_code);
   try {
     app.parse(argc, argv);
   } catch (const CLI::Success& e) {
