@@ -7,18 +7,15 @@
 namespace rackreach {
 namespace {
 
-enum class Bound { lower, upper };  // the lower or upper bound of F where the table does not cover it
 enum class Side { at, left, right };  // F(x), F(x-) or F(x+)
 
-// F of one curve at x, in percent.
-double calc_cdf(const QuantileCurve& c, double x, Bound bound, Side side) {
+// F of one curve at x, in percent. Outside the tabulated range this is the lower bound of F: 0 below the first
+// value and the last tabulated percentile above the last value (both exact when the table runs from 0 to 100).
+double calc_cdf(const QuantileCurve& c, double x, Side side) {
   const std::vector<double>& p = c.percentiles;
   const std::vector<double>& q = c.values;
-  const double below = bound == Bound::lower ? 0.0 : p.front();
-  const double above = bound == Bound::lower ? p.back() : 100.0;
-  if (x < q.front() || (side == Side::left && x == q.front())) return below;
-  if (x > q.back() || (side == Side::right && x == q.back())) return above;
-  if (x == q.back() && side == Side::at) return p.back();
+  if (x < q.front() || (side == Side::left && x == q.front())) return 0.0;
+  if (x >= q.back() && !(side == Side::left && x == q.back())) return p.back();
   // Segment [q[k], q[k+1]] that holds x: for F(x) and F(x+) the last k with q[k] <= x, for F(x-) the last with
   // q[k] < x. q[k+1] > q[k] in both cases, so the division is safe.
   const auto it = side == Side::left ? std::lower_bound(q.begin(), q.end(), x) : std::upper_bound(q.begin(), q.end(), x);
@@ -26,31 +23,24 @@ double calc_cdf(const QuantileCurve& c, double x, Bound bound, Side side) {
   return p[k] + (x - q[k]) / (q[k + 1] - q[k]) * (p[k + 1] - p[k]);
 }
 
-double calc_mixed_cdf(std::span<const WeightedCurve> parts, double x, Bound bound, Side side) {
+double calc_mixed_cdf(std::span<const WeightedCurve> parts, double x, Side side) {
   double m = 0.0;
-  for (const WeightedCurve& part : parts) m += part.weight * calc_cdf(*part.curve, x, bound, side);
+  for (const WeightedCurve& part : parts) m += part.weight * calc_cdf(*part.curve, x, side);
   return m;
 }
 
-// min{x : M(x) >= p} for M built with one bound; empty where it is unbounded.
-std::optional<double> solve(std::span<const WeightedCurve> parts, const std::vector<double>& breaks, double p,
-                            Bound bound) {
-  const double m_below = calc_mixed_cdf(parts, breaks.front(), bound, Side::left);
-  if (p <= m_below) {
-    // Only the 0th percentile of tables that start at 0 is the smallest value; otherwise Q lies below the table.
-    if (m_below == 0.0) return breaks.front();
-    return std::nullopt;
-  }
+// min{x : M(x) >= p} with M built from the lower bounds of F; empty where M never reaches p.
+std::optional<double> solve(std::span<const WeightedCurve> parts, const std::vector<double>& breaks, double p) {
+  if (p <= calc_mixed_cdf(parts, breaks.front(), Side::left)) return breaks.front();  // p = 0
   for (std::size_t j = 0; j < breaks.size(); ++j) {
-    if (calc_mixed_cdf(parts, breaks[j], bound, Side::at) < p) continue;
+    if (calc_mixed_cdf(parts, breaks[j], Side::at) < p) continue;
     if (j == 0) return breaks[0];  // M jumps over p at the first value
-    const double lo = calc_mixed_cdf(parts, breaks[j - 1], bound, Side::right);
-    const double hi = calc_mixed_cdf(parts, breaks[j], bound, Side::left);
+    const double lo = calc_mixed_cdf(parts, breaks[j - 1], Side::right);
+    const double hi = calc_mixed_cdf(parts, breaks[j], Side::left);
     if (lo >= p) return breaks[j - 1];
     if (hi >= p) return breaks[j - 1] + (p - lo) / (hi - lo) * (breaks[j] - breaks[j - 1]);
     return breaks[j];  // M jumps over p at breaks[j] (a repeated value)
   }
-  if (calc_mixed_cdf(parts, breaks.back(), bound, Side::right) >= p) return breaks.back();
   return std::nullopt;
 }
 
@@ -69,13 +59,21 @@ std::optional<double> calc_mixture_percentile(std::span<const WeightedCurve> par
   if (used.empty() || !(percentile >= 0.0 && percentile <= 100.0)) return std::nullopt;
   std::sort(breaks.begin(), breaks.end());
   breaks.erase(std::unique(breaks.begin(), breaks.end()), breaks.end());
-  const std::optional<double> low = solve(used, breaks, percentile, Bound::upper);
-  const std::optional<double> high = solve(used, breaks, percentile, Bound::lower);
-  if (!low || !high) return std::nullopt;
-  // Where the tables cover the answer both bounds give the same x, up to rounding.
-  const double scale = std::max({1.0, std::abs(*low), std::abs(*high)});
-  if (std::abs(*high - *low) > 1e-9 * scale) return std::nullopt;
-  return *high;
+  const std::optional<double> x = solve(used, breaks, percentile);
+  if (!x) return std::nullopt;
+  // x is the true answer only if no part the tables do not cover could move it:
+  // - above a part's last value F is only known to be at least its last percentile, so the true M may reach p
+  //   earlier: no answer unless that part's table runs to 100;
+  // - below a part's first value F is below its first percentile (the table says Q(p0) = q0); the true M stays
+  //   below p left of x if it does so with F at that first percentile.
+  double m_left_upper = 0.0;
+  for (const WeightedCurve& part : used) {
+    const QuantileCurve& c = *part.curve;
+    if (*x > c.values.back() && c.percentiles.back() < 100.0) return std::nullopt;
+    m_left_upper += part.weight * (*x <= c.values.front() ? c.percentiles.front() : calc_cdf(c, *x, Side::left));
+  }
+  if (m_left_upper > percentile + 1e-10) return std::nullopt;  // rounding of the sums only
+  return x;
 }
 
 MeanSd calc_mixture_mean_sd(std::span<const WeightedMeanSd> parts) {

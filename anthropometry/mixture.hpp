@@ -10,8 +10,8 @@
 // weight 1 the rule gives back that sex's tabulated percentile.
 //
 // A table may list only part of the range (e.g. the 5th to the 95th percentile). Outside it F_s is only known to
-// lie between bounds (0 and the first listed percentile below; the last listed and 100 above): Q is computed with
-// both bounds and is returned only where the two agree, i.e. where the answer does not depend on the unknown part.
+// lie between bounds (below the first listed percentile below the table, above the last one above it): Q is
+// returned only where it does not depend on the unknown part.
 
 #include <optional>
 #include <span>

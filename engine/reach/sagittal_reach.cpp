@@ -88,7 +88,7 @@ std::string_view depth_zone_name(DepthZone z) {
 const ReachCheck* ReachResult::find_worst_failure() const {
   const ReachCheck* worst = nullptr;
   for (const ReachCheck& c : checks) {
-    if (!c.passed && (!worst || c.margin_cm < worst->margin_cm)) worst = &c;
+    if (!c.passed && !c.advisory && (!worst || c.margin_cm < worst->margin_cm)) worst = &c;
   }
   return worst;
 }
@@ -163,6 +163,7 @@ ReachResult calc_reach(const ReachBody& small, const ReachBody& large, const Rea
   const double comfortable = p.comfortable_reach_fraction * small.shoulder_grip_length_cm;
   ReachCheck comfort = make_check("comfortable_reach", ReachWorker::small, "shoulder_grip_length", comfortable,
                                   distance, comfort_params);
+  comfort.advisory = true;
   comfort.message = who(small, ReachWorker::small) + ": the grip is " + cm(distance) +
                     " from the shoulder, comfortable reach is " + cm(comfortable) + ": " + verdict(comfort);
   ReachCheck overhead = make_check("overhead_reach", ReachWorker::small, "overhead_grip_reach",

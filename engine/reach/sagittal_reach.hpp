@@ -104,6 +104,7 @@ struct ReachCheck {
   double needed_cm = 0.0;             ///< what the grip point asks for
   double margin_cm = 0.0;             ///< available - needed; negative: short by that much
   bool passed = true;
+  bool advisory = false;              ///< a comfort zone, not a limit: never the worst failure
   std::vector<std::string> parameters;  ///< ReachParameters fields the check depends on
   std::string message;                ///< one sentence for people
 };
@@ -119,7 +120,7 @@ struct ReachResult {
   double v_cm = 0.0;  ///< the lifting equation's V: floor to the grip
   std::vector<ReachCheck> checks;
 
-  /// The failed check with the most negative margin; empty if every check passed.
+  /// The failed limit (not advisory) with the most negative margin; nullptr if every limit is met.
   const ReachCheck* find_worst_failure() const;
 };
 
