@@ -11,7 +11,9 @@ std::filesystem::path resolve_data_dir(const char* env_value) {
   return RACKREACH_ANTHROPOMETRY_DATA_DIR;
 }
 
-std::filesystem::path find_data_dir() { return resolve_data_dir(std::getenv("RACKREACH_DATA_DIR")); }
+std::filesystem::path find_data_dir() {
+  return resolve_data_dir(std::getenv("RACKREACH_DATA_DIR"));
+}
 
 std::vector<std::filesystem::path> list_population_files(const std::filesystem::path& dir) {
   std::vector<std::filesystem::path> out;
@@ -53,15 +55,15 @@ LoadedWorkforce load_workforce(std::string_view name_or_path, SexMix mix, const 
     if (mix.weight(s) > 0.0 && !wf.table->has_sex(s)) {
       out.problems.push_back({file.string(), "subjects", "",
                               std::string("has no ") + std::string(sex_name(s)) +
-                                  " subjects, so the workforce cannot include " + (s == Sex::female ? "women" : "men")});
+                                  " subjects, so the workforce cannot include " +
+                                  (s == Sex::female ? "women" : "men")});
     }
   }
   if (!out.problems.empty()) return out;
 
   const Dimension* overhead = wf.table->find_dimension("overhead_grip_reach");
   if (prefer_measured_overhead_reach && is_shipped_name(name_or_path) &&
-      wf.table->name != measured_overhead_reach_table &&
-      (!overhead || overhead->kind == DimensionKind::derived)) {
+      wf.table->name != measured_overhead_reach_table && (!overhead || overhead->kind == DimensionKind::derived)) {
     const auto measured_file = dir / (std::string(measured_overhead_reach_table) + ".json");
     if (std::filesystem::exists(measured_file)) {
       LoadedPopulation measured = load_population_file(measured_file);
@@ -69,10 +71,10 @@ LoadedWorkforce load_workforce(std::string_view name_or_path, SexMix mix, const 
         out.problems = std::move(measured.problems);
         return out;
       }
-      wf.overrides.push_back({"overhead_grip_reach", std::make_shared<const PopulationTable>(std::move(*measured.table))});
+      wf.overrides.push_back(
+          {"overhead_grip_reach", std::make_shared<const PopulationTable>(std::move(*measured.table))});
       out.notes.push_back("overhead_grip_reach is taken from table \"" + std::string(measured_overhead_reach_table) +
-                          "\", which measured overhead reach standing; \"" + wf.table->name +
-                          "\" only estimates it");
+                          "\", which measured overhead reach standing; \"" + wf.table->name + "\" only estimates it");
     }
   }
   out.workforce = std::move(wf);

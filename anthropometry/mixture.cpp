@@ -18,7 +18,8 @@ double calc_cdf(const QuantileCurve& c, double x, Side side) {
   if (x >= q.back() && !(side == Side::left && x == q.back())) return p.back();
   // Segment [q[k], q[k+1]] that holds x: for F(x) and F(x+) the last k with q[k] <= x, for F(x-) the last with
   // q[k] < x. q[k+1] > q[k] in both cases, so the division is safe.
-  const auto it = side == Side::left ? std::lower_bound(q.begin(), q.end(), x) : std::upper_bound(q.begin(), q.end(), x);
+  const auto it =
+      side == Side::left ? std::lower_bound(q.begin(), q.end(), x) : std::upper_bound(q.begin(), q.end(), x);
   const auto k = static_cast<std::size_t>(it - q.begin()) - 1;
   return p[k] + (x - q[k]) / (q[k + 1] - q[k]) * (p[k + 1] - p[k]);
 }

@@ -111,7 +111,9 @@ class Validator {
 };
 
 // Known dimensions whose quantity (length or mass) is fixed; any other name may be either.
-bool is_known_mass_dimension(const std::string& key) { return key == "body_mass"; }
+bool is_known_mass_dimension(const std::string& key) {
+  return key == "body_mass";
+}
 
 std::optional<SexDistribution> read_distribution(Validator& v, const Json& j, const std::string& path,
                                                  std::size_t n_percentiles, int subjects) {
@@ -131,7 +133,10 @@ std::optional<SexDistribution> read_distribution(Validator& v, const Json& j, co
   } else {
     good = false;
   }
-  if (auto m = v.number_at(j, path, "mean")) d.mean = *m; else good = false;
+  if (auto m = v.number_at(j, path, "mean"))
+    d.mean = *m;
+  else
+    good = false;
   if (auto s = v.number_at(j, path, "sd")) {
     d.sd = *s;
     if (*s < 0.0) {
@@ -160,8 +165,9 @@ std::optional<SexDistribution> read_distribution(Validator& v, const Json& j, co
     }
     const double x = e.get<double>();
     if (!d.quantiles.empty() && x < d.quantiles.back()) {
-      v.add(epath, &e, "must not be below the value before it (" + Json(d.quantiles.back()).dump() +
-                           "): a quantile function never decreases");
+      v.add(epath, &e,
+            "must not be below the value before it (" + Json(d.quantiles.back()).dump() +
+                "): a quantile function never decreases");
       good = false;
     }
     d.quantiles.push_back(x);
@@ -352,7 +358,8 @@ void write_json(std::ostringstream& out, const Json& j, int indent) {
       out << (i + 1 < j.size() ? ",\n" : "\n");
     }
     out << pad << "}";
-  } else if (j.is_array() && !j.empty() && !std::all_of(j.begin(), j.end(), [](const Json& e) { return e.is_number(); })) {
+  } else if (j.is_array() && !j.empty() &&
+             !std::all_of(j.begin(), j.end(), [](const Json& e) { return e.is_number(); })) {
     out << "[\n";
     for (std::size_t i = 0; i < j.size(); ++i) {
       out << inner;

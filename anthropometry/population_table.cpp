@@ -9,11 +9,16 @@ namespace rackreach {
 
 std::string_view table_unit_name(TableUnit u) {
   switch (u) {
-    case TableUnit::mm: return "mm";
-    case TableUnit::cm: return "cm";
-    case TableUnit::in: return "in";
-    case TableUnit::kg: return "kg";
-    case TableUnit::lb: return "lb";
+    case TableUnit::mm:
+      return "mm";
+    case TableUnit::cm:
+      return "cm";
+    case TableUnit::in:
+      return "in";
+    case TableUnit::kg:
+      return "kg";
+    case TableUnit::lb:
+      return "lb";
   }
   return "";
 }
@@ -27,11 +32,16 @@ std::optional<TableUnit> find_table_unit(std::string_view name) {
 
 double factor_to_cm_or_kg(TableUnit u) {
   switch (u) {
-    case TableUnit::mm: return 0.1;
-    case TableUnit::cm: return 1.0;
-    case TableUnit::in: return cm_per_in;
-    case TableUnit::kg: return 1.0;
-    case TableUnit::lb: return kg_per_lb;
+    case TableUnit::mm:
+      return 0.1;
+    case TableUnit::cm:
+      return 1.0;
+    case TableUnit::in:
+      return cm_per_in;
+    case TableUnit::kg:
+      return 1.0;
+    case TableUnit::lb:
+      return kg_per_lb;
   }
   return 1.0;
 }

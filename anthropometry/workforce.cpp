@@ -91,7 +91,9 @@ const PopulationTable& Workforce::find_table_for(std::string_view dimension) con
   return *table;
 }
 
-std::string Workforce::describe() const { return table->name + ", " + percent(mix.women) + " women"; }
+std::string Workforce::describe() const {
+  return table->name + ", " + percent(mix.women) + " women";
+}
 
 WorkforceValue calc_workforce_percentile(const Workforce& wf, std::string_view dimension, double percentile) {
   WorkforceValue out;
@@ -147,8 +149,12 @@ ReachBodyResult calc_reach_body(const Workforce& wf, double percentile) {
   ReachBody b;
   b.percentile = percentile;
   b.label = ordinal(percentile) + " percentile, " + wf.describe();
-  double* fields[] = {&b.stature_cm,           &b.acromial_height_cm,     &b.elbow_height_cm,
-                      &b.grip_centre_height_cm, &b.overhead_grip_reach_cm, &b.shoulder_grip_length_cm,
+  double* fields[] = {&b.stature_cm,
+                      &b.acromial_height_cm,
+                      &b.elbow_height_cm,
+                      &b.grip_centre_height_cm,
+                      &b.overhead_grip_reach_cm,
+                      &b.shoulder_grip_length_cm,
                       &b.hand_breadth_cm};
   static_assert(std::size(fields) == std::size(reach_dimension_keys));
   for (std::size_t i = 0; i < std::size(fields); ++i) {

@@ -62,9 +62,13 @@ struct WorkforceMeanSd {
 WorkforceMeanSd calc_workforce_mean_sd(const Workforce& wf, std::string_view dimension);
 
 /// Dimension keys the reach model needs from a table.
-inline constexpr std::string_view reach_dimension_keys[] = {
-    "stature",         "acromial_height",      "elbow_height", "grip_centre_height", "overhead_grip_reach",
-    "shoulder_grip_length", "hand_breadth"};
+inline constexpr std::string_view reach_dimension_keys[] = {"stature",
+                                                            "acromial_height",
+                                                            "elbow_height",
+                                                            "grip_centre_height",
+                                                            "overhead_grip_reach",
+                                                            "shoulder_grip_length",
+                                                            "hand_breadth"};
 
 struct ReachBodyResult {
   std::optional<ReachBody> body;

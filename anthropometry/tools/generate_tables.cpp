@@ -1,7 +1,8 @@
 // SPDX-License-Identifier: MIT
 // rackreach-anthropometry-gen: writes a population table (anthropometry/data/NAME.json) from a survey's raw files.
 //
-//   rackreach-anthropometry-gen --survey ansur2 --raw ../shared/anthropometry/ansur2 --out anthropometry/data/ansur2.json
+//   rackreach-anthropometry-gen --survey ansur2 --raw ../shared/anthropometry/ansur2 --out
+//   anthropometry/data/ansur2.json
 //
 // Every subject row must be accounted for: the row count, the sex column and every value used are checked, and
 // the tool stops with a message naming file, line and column at the first surprise. After writing, it reads the
@@ -44,7 +45,9 @@ double calc_type7(const std::vector<double>& x, double p) {
   return x[i] + (h - static_cast<double>(i)) * (x[i + 1] - x[i]);
 }
 
-double round_to(double v, double step) { return std::round(v / step) * step; }
+double round_to(double v, double step) {
+  return std::round(v / step) * step;
+}
 
 SexDistribution summarise(std::vector<double> x, const std::vector<double>& grid, double step) {
   std::sort(x.begin(), x.end());

@@ -73,9 +73,7 @@ std::size_t find_column(const RawTable& t, std::string_view name) {
 }
 
 std::optional<double> read_measurement(const RawTable& t, std::size_t row, std::size_t col) {
-  const auto where = [&] {
-    return t.file_name + " line " + std::to_string(row + 2) + " column " + t.header.at(col);
-  };
+  const auto where = [&] { return t.file_name + " line " + std::to_string(row + 2) + " column " + t.header.at(col); };
   if (col >= t.rows[row].size()) throw std::runtime_error(where() + ": the field is missing");
   const std::string& s = t.rows[row][col];
   long long v = 0;

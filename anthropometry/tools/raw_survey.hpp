@@ -14,9 +14,9 @@ namespace rackreach {
 
 struct RawTable {
   std::string file_name;
-  std::string bytes;                              ///< the whole file, unchanged (hashed into the table)
+  std::string bytes;  ///< the whole file, unchanged (hashed into the table)
   std::vector<std::string> header;
-  std::vector<std::vector<std::string>> rows;     ///< fields as text; a short row has fewer fields
+  std::vector<std::vector<std::string>> rows;  ///< fields as text; a short row has fewer fields
 };
 
 /// Reads the file; throws std::runtime_error naming the file if it cannot be read or has no header.

@@ -30,8 +30,8 @@ struct OutputDimension {
 struct RawFileSpec {
   std::string name;
   Sex sex = Sex::female;
-  std::size_t expected_rows = 0;        ///< the generator stops if the file has any other number
-  std::string sex_column;               ///< column that must hold `sex_value` in every row
+  std::size_t expected_rows = 0;  ///< the generator stops if the file has any other number
+  std::string sex_column;         ///< column that must hold `sex_value` in every row
   std::string sex_value;
 };
 

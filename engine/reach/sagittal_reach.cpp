@@ -40,20 +40,20 @@ std::string verdict(const ReachCheck& c) {
 
 void add_problem_if(std::vector<ReachInputProblem>& out, bool bad, const std::string& field, double value,
                     const std::string& rule) {
-  if (bad || !std::isfinite(value)) out.push_back({field, value, std::isfinite(value) ? rule : "must be a finite number"});
+  if (bad || !std::isfinite(value))
+    out.push_back({field, value, std::isfinite(value) ? rule : "must be a finite number"});
 }
 
 void validate_body(std::vector<ReachInputProblem>& out, const ReachBody& b, const std::string& who) {
   add_problem_if(out, b.percentile < 0.0 || b.percentile > 100.0, who + ".percentile", b.percentile,
                  "must be from 0 to 100");
-  const std::pair<const char*, double> lengths[] = {
-      {"stature_cm", b.stature_cm},
-      {"acromial_height_cm", b.acromial_height_cm},
-      {"elbow_height_cm", b.elbow_height_cm},
-      {"grip_centre_height_cm", b.grip_centre_height_cm},
-      {"overhead_grip_reach_cm", b.overhead_grip_reach_cm},
-      {"shoulder_grip_length_cm", b.shoulder_grip_length_cm},
-      {"hand_breadth_cm", b.hand_breadth_cm}};
+  const std::pair<const char*, double> lengths[] = {{"stature_cm", b.stature_cm},
+                                                    {"acromial_height_cm", b.acromial_height_cm},
+                                                    {"elbow_height_cm", b.elbow_height_cm},
+                                                    {"grip_centre_height_cm", b.grip_centre_height_cm},
+                                                    {"overhead_grip_reach_cm", b.overhead_grip_reach_cm},
+                                                    {"shoulder_grip_length_cm", b.shoulder_grip_length_cm},
+                                                    {"hand_breadth_cm", b.hand_breadth_cm}};
   for (const auto& [name, v] : lengths) add_problem_if(out, v <= 0.0, who + "." + name, v, "must be more than 0");
   add_problem_if(out, !(b.grip_centre_height_cm < b.elbow_height_cm), who + ".grip_centre_height_cm",
                  b.grip_centre_height_cm, "must be below elbow_height_cm (" + cm(b.elbow_height_cm) + ")");
@@ -67,20 +67,28 @@ void validate_body(std::vector<ReachInputProblem>& out, const ReachBody& b, cons
 
 std::string_view height_zone_name(HeightZone z) {
   switch (z) {
-    case HeightZone::below_grip_centre: return "below grip-centre height";
-    case HeightZone::grip_centre_to_elbow: return "grip-centre to elbow height";
-    case HeightZone::elbow_to_shoulder: return "elbow to shoulder height";
-    case HeightZone::above_shoulder: return "above shoulder height";
-    case HeightZone::beyond_overhead_reach: return "beyond overhead grip reach";
+    case HeightZone::below_grip_centre:
+      return "below grip-centre height";
+    case HeightZone::grip_centre_to_elbow:
+      return "grip-centre to elbow height";
+    case HeightZone::elbow_to_shoulder:
+      return "elbow to shoulder height";
+    case HeightZone::above_shoulder:
+      return "above shoulder height";
+    case HeightZone::beyond_overhead_reach:
+      return "beyond overhead grip reach";
   }
   return "";
 }
 
 std::string_view depth_zone_name(DepthZone z) {
   switch (z) {
-    case DepthZone::within_comfortable_reach: return "within comfortable reach";
-    case DepthZone::within_maximum_reach: return "within maximum reach";
-    case DepthZone::beyond_maximum_reach: return "beyond maximum reach";
+    case DepthZone::within_comfortable_reach:
+      return "within comfortable reach";
+    case DepthZone::within_maximum_reach:
+      return "within maximum reach";
+    case DepthZone::beyond_maximum_reach:
+      return "beyond maximum reach";
   }
   return "";
 }
@@ -156,8 +164,8 @@ ReachResult calc_reach(const ReachBody& small, const ReachBody& large, const Rea
   ReachCheck max_reach = make_check("max_reach", ReachWorker::small, "shoulder_grip_length",
                                     small.shoulder_grip_length_cm, distance, sphere_params);
   max_reach.message = who(small, ReachWorker::small) + ": the grip is " + cm(distance) +
-                      " from the shoulder, the straight-arm grip reach is " + cm(small.shoulder_grip_length_cm) +
-                      ": " + verdict(max_reach);
+                      " from the shoulder, the straight-arm grip reach is " + cm(small.shoulder_grip_length_cm) + ": " +
+                      verdict(max_reach);
   std::vector<std::string> comfort_params = sphere_params;
   comfort_params.push_back("comfortable_reach_fraction");
   const double comfortable = p.comfortable_reach_fraction * small.shoulder_grip_length_cm;
@@ -166,9 +174,9 @@ ReachResult calc_reach(const ReachBody& small, const ReachBody& large, const Rea
   comfort.advisory = true;
   comfort.message = who(small, ReachWorker::small) + ": the grip is " + cm(distance) +
                     " from the shoulder, comfortable reach is " + cm(comfortable) + ": " + verdict(comfort);
-  ReachCheck overhead = make_check("overhead_reach", ReachWorker::small, "overhead_grip_reach",
-                                   small.overhead_grip_reach_cm + p.footwear_allowance_cm, q.grip_height_cm,
-                                   {"footwear_allowance_cm"});
+  ReachCheck overhead =
+      make_check("overhead_reach", ReachWorker::small, "overhead_grip_reach",
+                 small.overhead_grip_reach_cm + p.footwear_allowance_cm, q.grip_height_cm, {"footwear_allowance_cm"});
   overhead.message = who(small, ReachWorker::small) + ": the grip is " + cm(q.grip_height_cm) +
                      " above the floor, overhead grip reach with shoes is " + cm(overhead.available_cm) + ": " +
                      verdict(overhead);
@@ -184,10 +192,10 @@ ReachResult calc_reach(const ReachBody& small, const ReachBody& large, const Rea
   // Large worker: the hand must pass below the structure above the grip, the head below the one over the aisle.
   if (q.structure_above_grip_cm) {
     const double hand_above = p.hand_above_grip_fraction_of_breadth * large.hand_breadth_cm;
-    ReachCheck hand = make_check("hand_clearance", ReachWorker::large, "hand_breadth",
-                                 *q.structure_above_grip_cm - q.grip_height_cm,
-                                 hand_above + p.hand_clearance_allowance_cm,
-                                 {"hand_above_grip_fraction_of_breadth", "hand_clearance_allowance_cm"});
+    ReachCheck hand =
+        make_check("hand_clearance", ReachWorker::large, "hand_breadth", *q.structure_above_grip_cm - q.grip_height_cm,
+                   hand_above + p.hand_clearance_allowance_cm,
+                   {"hand_above_grip_fraction_of_breadth", "hand_clearance_allowance_cm"});
     hand.message = who(large, ReachWorker::large) + ": " + cm(hand.available_cm) +
                    " free above the grip, the hand needs " + cm(hand_above) + " plus " +
                    cm(p.hand_clearance_allowance_cm) + " allowance: " + verdict(hand);
@@ -204,13 +212,13 @@ ReachResult calc_reach(const ReachBody& small, const ReachBody& large, const Rea
   }
 
   // The lifting equation's own limits at this point (Waters et al. 1993): HM = 0 beyond H max, VM = 0 beyond V max.
-  ReachCheck h_limit = make_check("equation_h_limit", std::nullopt, "", rnle_metric.h_max, r.h_cm,
-                                  {"ankle_to_rack_face_cm"});
+  ReachCheck h_limit =
+      make_check("equation_h_limit", std::nullopt, "", rnle_metric.h_max, r.h_cm, {"ankle_to_rack_face_cm"});
   h_limit.message = "lifting equation: H = " + cm(r.h_cm) + " (ankles to rack face plus grip depth), the limit is " +
                     cm(rnle_metric.h_max) + ": " + verdict(h_limit);
   ReachCheck v_limit = make_check("equation_v_limit", std::nullopt, "", rnle_metric.v_max, r.v_cm, {});
-  v_limit.message = "lifting equation: V = " + cm(r.v_cm) + ", the limit is " + cm(rnle_metric.v_max) + ": " +
-                    verdict(v_limit);
+  v_limit.message =
+      "lifting equation: V = " + cm(r.v_cm) + ", the limit is " + cm(rnle_metric.v_max) + ": " + verdict(v_limit);
   r.checks.push_back(std::move(h_limit));
   r.checks.push_back(std::move(v_limit));
   return r;

@@ -39,12 +39,12 @@ inline constexpr double default_large_worker_percentile = 95.0;
 /// The body dimensions of one worker that the reach model uses: each a percentile of the workforce, in cm,
 /// barefoot (the model adds the footwear allowance).
 struct ReachBody {
-  std::string label;                  ///< who this is, e.g. "5th percentile, ANSUR II (2012), 50% women"
-  double percentile = 0.0;            ///< of the workforce, 0..100
-  double stature_cm = 0.0;            ///< floor to top of head
-  double acromial_height_cm = 0.0;    ///< floor to acromion: the shoulder pivot
-  double elbow_height_cm = 0.0;       ///< floor to underside of the elbow, arm hanging, elbow flexed 90 deg
-  double grip_centre_height_cm = 0.0; ///< floor to the axis of a gripped handle, arm hanging
+  std::string label;                     ///< who this is, e.g. "5th percentile, ANSUR II (2012), 50% women"
+  double percentile = 0.0;               ///< of the workforce, 0..100
+  double stature_cm = 0.0;               ///< floor to top of head
+  double acromial_height_cm = 0.0;       ///< floor to acromion: the shoulder pivot
+  double elbow_height_cm = 0.0;          ///< floor to underside of the elbow, arm hanging, elbow flexed 90 deg
+  double grip_centre_height_cm = 0.0;    ///< floor to the axis of a gripped handle, arm hanging
   double overhead_grip_reach_cm = 0.0;   ///< floor to the axis of a gripped handle, arm raised straight up
   double shoulder_grip_length_cm = 0.0;  ///< acromion to the axis of a gripped handle, arm straight: reach radius
   double hand_breadth_cm = 0.0;          ///< across the knuckles (metacarpals)
@@ -85,14 +85,22 @@ struct ReachQuery {
   std::optional<double> structure_above_picker_cm;
 };
 
-enum class HeightZone { below_grip_centre, grip_centre_to_elbow, elbow_to_shoulder, above_shoulder, beyond_overhead_reach };
+enum class HeightZone {
+  below_grip_centre,
+  grip_centre_to_elbow,
+  elbow_to_shoulder,
+  above_shoulder,
+  beyond_overhead_reach
+};
 std::string_view height_zone_name(HeightZone z);
 
 enum class DepthZone { within_comfortable_reach, within_maximum_reach, beyond_maximum_reach };
 std::string_view depth_zone_name(DepthZone z);
 
 enum class ReachWorker { small, large };
-constexpr std::string_view reach_worker_name(ReachWorker w) { return w == ReachWorker::small ? "small" : "large"; }
+constexpr std::string_view reach_worker_name(ReachWorker w) {
+  return w == ReachWorker::small ? "small" : "large";
+}
 
 /// One check of a grip point, explained: what was compared with what, for whom, and what it depends on.
 struct ReachCheck {
@@ -104,9 +112,9 @@ struct ReachCheck {
   double needed_cm = 0.0;             ///< what the grip point asks for
   double margin_cm = 0.0;             ///< available - needed; negative: short by that much
   bool passed = true;
-  bool advisory = false;              ///< a comfort zone, not a limit: never the worst failure
+  bool advisory = false;                ///< a comfort zone, not a limit: never the worst failure
   std::vector<std::string> parameters;  ///< ReachParameters fields the check depends on
-  std::string message;                ///< one sentence for people
+  std::string message;                  ///< one sentence for people
 };
 
 struct ReachResult {

@@ -16,8 +16,12 @@
 
 namespace raw_check {
 
-inline std::string shared_dir() { return RACKREACH_SHARED_DIR; }
-inline bool shared_present() { return std::filesystem::exists(shared_dir() + "/anthropometry/ansur2/README.md"); }
+inline std::string shared_dir() {
+  return RACKREACH_SHARED_DIR;
+}
+inline bool shared_present() {
+  return std::filesystem::exists(shared_dir() + "/anthropometry/ansur2/README.md");
+}
 
 /// Rows of a raw file as column name (lower-cased) -> value; -999 cells are left out of the row.
 inline std::vector<std::map<std::string, double>> read_rows(const std::string& file, char delimiter) {
@@ -29,7 +33,10 @@ inline std::vector<std::map<std::string, double>> read_rows(const std::string& f
     std::vector<std::string> out(1);
     for (char c : l) {
       if (c == '\r' || c == '"') continue;
-      if (c == delimiter) out.emplace_back(); else out.back() += c;
+      if (c == delimiter)
+        out.emplace_back();
+      else
+        out.back() += c;
     }
     return out;
   };
@@ -81,7 +88,8 @@ inline double type7(const std::vector<double>& x, double p) {
 }
 
 /// The survey's own percentiles.csv: (dimension, sex, statistic) -> value (mm, or kg for weight_kg).
-inline std::map<std::tuple<std::string, std::string, std::string>, double> read_percentiles_csv(const std::string& file) {
+inline std::map<std::tuple<std::string, std::string, std::string>, double> read_percentiles_csv(
+    const std::string& file) {
   std::map<std::tuple<std::string, std::string, std::string>, double> out;
   std::ifstream in(file);
   std::string line;

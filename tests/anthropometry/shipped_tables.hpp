@@ -11,7 +11,9 @@
 
 namespace shipped {
 
-inline std::string data_dir() { return std::string(RACKREACH_SOURCE_DIR) + "/anthropometry/data"; }
+inline std::string data_dir() {
+  return std::string(RACKREACH_SOURCE_DIR) + "/anthropometry/data";
+}
 
 inline std::shared_ptr<const rackreach::PopulationTable> load(const std::string& name) {
   rackreach::LoadedPopulation loaded = rackreach::load_population_file(data_dir() + "/" + name + ".json");

@@ -16,7 +16,8 @@ double bisect_mixture(const std::vector<rackreach::WeightedCurve>& parts, double
     if (x >= c.values.back()) return 100.0;
     std::size_t k = 0;
     while (k + 1 < c.values.size() && c.values[k + 1] <= x) ++k;
-    return c.percentiles[k] + (x - c.values[k]) / (c.values[k + 1] - c.values[k]) * (c.percentiles[k + 1] - c.percentiles[k]);
+    return c.percentiles[k] +
+           (x - c.values[k]) / (c.values[k + 1] - c.values[k]) * (c.percentiles[k + 1] - c.percentiles[k]);
   };
   double lo = 1e9, hi = -1e9;
   for (const auto& part : parts) {
@@ -53,8 +54,8 @@ TEST_CASE("50/50 mixture matches the survey's mixed5050 percentiles within 1 mm"
       {"ansur1988", "overhead_grip_reach", "derived_overheadgripreach_standing"},
       {"ansur1988", "grip_centre_height", "derived_gripcenterheight"}};
   for (const auto& [table_name, ours, theirs] : pairs) {
-    const auto csv = raw_check::read_percentiles_csv(raw_check::shared_dir() + "/anthropometry/" + table_name +
-                                                     "/percentiles.csv");
+    const auto csv =
+        raw_check::read_percentiles_csv(raw_check::shared_dir() + "/anthropometry/" + table_name + "/percentiles.csv");
     const auto wf = shipped::workforce(table_name, 0.5);
     const double unit = ours == "body_mass" ? 1.0 : 0.1;
     for (const auto& [stat, p] : {std::pair{"p05", 5.0}, std::pair{"p50", 50.0}, std::pair{"p95", 95.0}}) {
@@ -87,7 +88,8 @@ TEST_CASE("a one-sex mixture returns that sex's percentile exactly", "[anthropom
   }
 }
 
-TEST_CASE("mixture: exact solution equals a bisection of the mixed CDF, and respects ties", "[anthropometry][mixture]") {
+TEST_CASE("mixture: exact solution equals a bisection of the mixed CDF, and respects ties",
+          "[anthropometry][mixture]") {
   const auto table = shipped::load("ansur2");
   const auto* dim = table->find_dimension("wrist_height");
   REQUIRE(dim);

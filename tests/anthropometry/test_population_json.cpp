@@ -61,7 +61,8 @@ TEST_CASE("shipped tables load without problems and save back to the same text",
   }
 }
 
-TEST_CASE("a user table with only the 5th, 50th and 95th percentiles loads with its citation", "[anthropometry][file]") {
+TEST_CASE("a user table with only the 5th, 50th and 95th percentiles loads with its citation",
+          "[anthropometry][file]") {
   const rackreach::LoadedWorkforce loaded =
       rackreach::load_workforce(fixture("user_table_5_50_95.json"), rackreach::SexMix{0.5}, shipped::data_dir(), true);
   for (const auto& p : loaded.problems) UNSCOPED_INFO(rackreach::format_problem(p));

@@ -13,7 +13,8 @@ constexpr double cm_per_in = 2.54;
 
 }  // namespace
 
-TEST_CASE("MIL-STD-1472G shoulder height and functional reach, 5th female and 95th male", "[anthropometry][published]") {
+TEST_CASE("MIL-STD-1472G shoulder height and functional reach, 5th female and 95th male",
+          "[anthropometry][published]") {
   // Source: MIL-STD-1472G Appendix B as reproduced in NUREG-0700 Rev. 3 Table 11.4 (standing, no shoes):
   // shoulder height 5th female 123.0 cm, 95th male 155.3 cm; functional reach 67.7 cm and 88.6 cm.
   // Tolerance 1.5 cm (about a quarter of an SD): the standard's table is drawn from other survey samples than the
@@ -28,7 +29,8 @@ TEST_CASE("MIL-STD-1472G shoulder height and functional reach, 5th female and 95
   CHECK(shipped::percentile(men, "thumb_tip_reach", 95) == Approx(88.6).margin(tolerance_cm));
 }
 
-TEST_CASE("overhead grip reach of the 5th-percentile woman is about 181 cm by three routes", "[anthropometry][published]") {
+TEST_CASE("overhead grip reach of the 5th-percentile woman is about 181 cm by three routes",
+          "[anthropometry][published]") {
   // Source: Pheasant S., Bodyspace, 2nd ed., 1996, U.S. adults 19-65: standing vertical grip reach, 5th female
   // 71.1 in (as tabulated in a course deck reproducing Pheasant).
   const double pheasant_cm = 71.1 * cm_per_in;
@@ -50,15 +52,18 @@ TEST_CASE("the ansur2 overhead-reach note states the differences the two tables 
   REQUIRE(dim);
   REQUIRE(dim->note.find("1810.2 vs 1810.7 mm") != std::string::npos);
   REQUIRE(dim->note.find("2300.0 vs 2257.0 mm") != std::string::npos);
-  CHECK(shipped::percentile(shipped::workforce("ansur2", 1.0), "overhead_grip_reach", 5) == Approx(181.02).margin(0.01));
+  CHECK(shipped::percentile(shipped::workforce("ansur2", 1.0), "overhead_grip_reach", 5) ==
+        Approx(181.02).margin(0.01));
   CHECK(shipped::percentile(shipped::workforce("ansur1988", 1.0), "overhead_grip_reach", 5) ==
         Approx(181.07).margin(0.01));
-  CHECK(shipped::percentile(shipped::workforce("ansur2", 0.0), "overhead_grip_reach", 95) == Approx(230.0).margin(0.01));
+  CHECK(shipped::percentile(shipped::workforce("ansur2", 0.0), "overhead_grip_reach", 95) ==
+        Approx(230.0).margin(0.01));
   CHECK(shipped::percentile(shipped::workforce("ansur1988", 0.0), "overhead_grip_reach", 95) ==
         Approx(225.7).margin(0.01));
 }
 
-TEST_CASE("forward grip reach from the shoulder against Pheasant's shoulder-grip length", "[anthropometry][published]") {
+TEST_CASE("forward grip reach from the shoulder against Pheasant's shoulder-grip length",
+          "[anthropometry][published]") {
   // Source: shoulder-grip length (acromion to the centre of a gripped rod, elbow and wrist straight), British
   // adults 19-65, from a university anthropometry course page citing Pheasant: men 610 / 665 / 715 mm
   // (5th/50th/95th), women 555 / 600 mm (5th/50th). Tolerance 1 cm: British civilians against U.S. soldiers.

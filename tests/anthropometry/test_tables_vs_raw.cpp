@@ -18,10 +18,12 @@ struct RawDimension {
   std::string key;                   // our dimension
   std::vector<std::string> columns;  // raw columns, lower case
   std::function<double(const std::vector<double>&)> f;
-  double to_table_unit;              // raw file unit -> cm (or kg)
+  double to_table_unit;  // raw file unit -> cm (or kg)
 };
 
-double one(const std::vector<double>& v) { return v[0]; }
+double one(const std::vector<double>& v) {
+  return v[0];
+}
 
 // The formulas as the survey READMEs state them.
 const std::vector<RawDimension> ansur2_dims = {
@@ -32,20 +34,28 @@ const std::vector<RawDimension> ansur2_dims = {
     {"body_mass", {"weightkg"}, one, 0.1},  // file unit 0.1 kg
     {"grip_centre_height",
      {"wristheight", "handlength", "forearmhandlength", "forearmcenterofgriplength"},
-     [](const std::vector<double>& v) { return v[0] - (v[1] - (v[2] - v[3])); }, 0.1},
+     [](const std::vector<double>& v) { return v[0] - (v[1] - (v[2] - v[3])); },
+     0.1},
     {"overhead_grip_reach",
      {"stature", "overheadfingertipreachsitting", "sittingheight", "forearmhandlength", "forearmcenterofgriplength"},
-     [](const std::vector<double>& v) { return v[0] + v[1] - v[2] - (v[3] - v[4]); }, 0.1},
+     [](const std::vector<double>& v) { return v[0] + v[1] - v[2] - (v[3] - v[4]); },
+     0.1},
 };
 
 const std::vector<RawDimension> ansur1988_dims = {
     {"stature", {"stature"}, one, 0.1},
     {"acromial_height", {"acromion_ht"}, one, 0.1},
-    {"overhead_grip_reach", {"ovrhd_reach", "hand_lnth", "wrist_to_center_of_grip_lnth"},
-     [](const std::vector<double>& v) { return v[0] - (v[1] - v[2]); }, 0.1},
-    {"shoulder_grip_length", {"acr-radl_lnth", "radiale-stylion_lnth", "wrist_to_center_of_grip_lnth"},
-     [](const std::vector<double>& v) { return v[0] + v[1] + v[2]; }, 0.1},
-    {"elbow_height", {"acromion_ht", "shoulder_elbow_lnth"}, [](const std::vector<double>& v) { return v[0] - v[1]; },
+    {"overhead_grip_reach",
+     {"ovrhd_reach", "hand_lnth", "wrist_to_center_of_grip_lnth"},
+     [](const std::vector<double>& v) { return v[0] - (v[1] - v[2]); },
+     0.1},
+    {"shoulder_grip_length",
+     {"acr-radl_lnth", "radiale-stylion_lnth", "wrist_to_center_of_grip_lnth"},
+     [](const std::vector<double>& v) { return v[0] + v[1] + v[2]; },
+     0.1},
+    {"elbow_height",
+     {"acromion_ht", "shoulder_elbow_lnth"},
+     [](const std::vector<double>& v) { return v[0] - v[1]; },
      0.1},
 };
 
@@ -57,8 +67,7 @@ void check_against_raw(const std::string& table_name, const std::string& female_
   }
   const auto table = shipped::load(table_name);
   const std::string dir = raw_check::shared_dir() + "/anthropometry/" + table_name + "/";
-  for (const auto& [sex, file, women] :
-       {std::tuple{"female", female_file, 1.0}, std::tuple{"male", male_file, 0.0}}) {
+  for (const auto& [sex, file, women] : {std::tuple{"female", female_file, 1.0}, std::tuple{"male", male_file, 0.0}}) {
     const auto rows = raw_check::read_rows(dir + file, delimiter);
     const rackreach::Workforce wf{table, rackreach::SexMix{women}, {}};
     for (const RawDimension& d : dims) {
@@ -131,8 +140,8 @@ TEST_CASE("shipped tables agree with each survey's own percentiles.csv", "[anthr
       {"ansur1988", "forward_grip_reach_from_wall", "derived_forwardgripreach"},
       {"ansur1988", "body_mass", "weight_kg"}};
   for (const auto& [table_name, ours, theirs] : pairs) {
-    const auto csv = raw_check::read_percentiles_csv(raw_check::shared_dir() + "/anthropometry/" + table_name +
-                                                     "/percentiles.csv");
+    const auto csv =
+        raw_check::read_percentiles_csv(raw_check::shared_dir() + "/anthropometry/" + table_name + "/percentiles.csv");
     const auto table = shipped::load(table_name);
     const double unit = ours == "body_mass" ? 1.0 : 0.1;  // csv: mm, or kg for weight_kg
     for (const auto& [sex, women] : {std::pair{"female", 1.0}, std::pair{"male", 0.0}}) {

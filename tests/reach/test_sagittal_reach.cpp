@@ -78,7 +78,7 @@ TEST_CASE("a point at shoulder height exactly one reach radius away is at zero m
   CHECK(check_of(inside, "max_reach").margin_cm == Approx(0.1).margin(1e-9));
   CHECK(check_of(inside, "max_reach").passed);
   CHECK(inside.depth_zone == DepthZone::within_maximum_reach);  // beyond 80% of the radius
-  CHECK(inside.find_worst_failure() == nullptr);  // beyond comfortable reach is advice, not a limit
+  CHECK(inside.find_worst_failure() == nullptr);                // beyond comfortable reach is advice, not a limit
   CHECK_FALSE(check_of(inside, "comfortable_reach").passed);
   CHECK(check_of(inside, "comfortable_reach").advisory);
 
@@ -133,8 +133,8 @@ TEST_CASE("height zones follow the worker's own heights plus footwear", "[reach]
 TEST_CASE("large worker: hand clearance below the beam and head clearance", "[reach]") {
   const ReachParameters params;
   const ReachBody large = large_worker();
-  const double needed = params.hand_above_grip_fraction_of_breadth * large.hand_breadth_cm +
-                        params.hand_clearance_allowance_cm;
+  const double needed =
+      params.hand_above_grip_fraction_of_breadth * large.hand_breadth_cm + params.hand_clearance_allowance_cm;
   ReachQuery q{120.0, 10.0, 120.0 + needed + 0.2, large.stature_cm + params.footwear_allowance_cm - 1.0};
   const ReachResult r = calc_reach(small_worker(), large, q, params);
   CHECK(check_of(r, "hand_clearance").margin_cm == Approx(0.2).margin(1e-9));
@@ -161,7 +161,8 @@ TEST_CASE("the lifting equation's H > 63 cm and V > 175 cm limits agree with the
   }
 }
 
-TEST_CASE("common practice: the back of a 3 ft (91 cm) deep shelf is beyond the equation's H limit", "[reach][common practice]") {
+TEST_CASE("common practice: the back of a 3 ft (91 cm) deep shelf is beyond the equation's H limit",
+          "[reach][common practice]") {
   // common practice: selective-rack bays are commonly 3 ft (0.91 m) deep. For any standing position in front of
   // the face, H = ankle-to-face distance + 91.44 cm exceeds 63 cm, so HM = 0 (Waters et al. 1993).
   const double shelf_depth_cm = 3 * 12 * 2.54;
