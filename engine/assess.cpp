@@ -21,7 +21,8 @@ JobAssessment assess_job(const LiftJob& job, UnitSystem units, DurationRule rule
     out.duration = calc_duration(job.work_pattern, rule);
   }
   if (!out.duration.category)
-    out.warnings.push_back({"limit.duration_over_8h", "job \"" + job.id + "\": " + out.duration.explanation});
+    out.warnings.push_back({WarningKind::duration_over_8h, LiftEnd::origin, 0.0, long_limit_hours,
+                            "job \"" + job.id + "\": " + out.duration.explanation});
   out.tasks.reserve(job.tasks.size());
   for (const LiftTask& task : job.tasks) out.tasks.push_back(evaluate_task(task, out.duration.category, units, mode));
   if (job.tasks.size() >= 2) {
@@ -31,16 +32,17 @@ JobAssessment assess_job(const LiftJob& job, UnitSystem units, DurationRule rule
       items.push_back(make_composite_item(job.tasks[i], out.tasks[i], units));
     out.composite = calc_composite_li(items, out.duration.category, mode);
     for (const CompositeTerm& t : out.composite->terms) {
-      if (t.fili && *t.fili > 1.0)
-        out.warnings.push_back({"flag.fili_above_1", "task \"" + t.id +
-                                                         "\": FILI above 1.0: the maximum load may be too much for "
-                                                         "some workers even at a low frequency (strength demand)"});
-      if (t.stli && *t.stli > 1.0)
-        out.warnings.push_back({"flag.stli_above_1",
-                                "task \"" + t.id + "\": STLI above 1.0: the task alone exceeds the limit"});
+      // Flags of the Applications Manual 2.4: any FILI > 1 (strength demand), any STLI > 1 (overall demand).
+      for (auto [kind, value] : {std::pair{WarningKind::fili_above_1, t.fili}, std::pair{WarningKind::stli_above_1, t.stli}})
+        if (value && *value > 1.0) {
+          Warning w{kind, LiftEnd::origin, *value, 1.0, {}};
+          w.note = "task \"" + t.id + "\": " + describe_warning(w, units);
+          out.warnings.push_back(std::move(w));
+        }
     }
     if (out.composite->undefined_reason)
-      out.warnings.push_back({"outside.cli", "job \"" + job.id + "\": CLI undefined: " + *out.composite->undefined_reason});
+      out.warnings.push_back({WarningKind::cli_undefined, LiftEnd::origin, 0.0, 0.0,
+                              "job \"" + job.id + "\": CLI undefined: " + *out.composite->undefined_reason});
   }
   return out;
 }

@@ -4,100 +4,97 @@
 #include <algorithm>
 #include <charconv>
 #include <cstdio>
-#include <nlohmann/json.hpp>
 
 #include "engine/caution.hpp"
+#include "engine/io/json_writer.hpp"
 #include "engine/version.hpp"
 
 namespace rackreach {
 namespace {
 
-using ojson = nlohmann::ordered_json;
-
-ojson opt(const std::optional<double>& x) { return x ? ojson(*x) : ojson(nullptr); }
-
-ojson point_json(const PointResult& p) {
-  ojson rules = ojson::array();
+void write_point(JsonWriter& w, const PointResult& p) {
+  w.begin_object();
+  w.field("hm", p.hm.value).field("vm", p.vm.value).field("dm", p.dm.value).field("am", p.am.value);
+  w.field("fm", p.fm.value).field("cm", p.cm.value);
+  w.field("rwl", p.rwl).field("firwl", p.firwl).field("strwl", p.strwl);
+  w.field("li", p.li).field("fili", p.fili).field("stli", p.stli);
+  w.key("used").begin_object();
+  w.field("h", p.hm.input_used).field("v", p.vm.input_used).field("d", p.dm.input_used);
+  w.field("a", p.am.input_used).field("f", p.fm.input_used);
+  w.end_object();
+  w.key("rules_applied").begin_array();
   for (const Multiplier* m : {&p.hm, &p.vm, &p.dm, &p.am, &p.fm})
-    if (m->rule != BoundaryRule::none) rules.push_back(boundary_rule_code(m->rule));
-  return ojson{{"hm", p.hm.value},
-               {"vm", p.vm.value},
-               {"dm", p.dm.value},
-               {"am", p.am.value},
-               {"fm", p.fm.value},
-               {"cm", p.cm.value},
-               {"rwl", p.rwl},
-               {"firwl", p.firwl},
-               {"strwl", p.strwl},
-               {"li", opt(p.li)},
-               {"fili", opt(p.fili)},
-               {"stli", opt(p.stli)},
-               {"used", {{"h", p.hm.input_used},
-                         {"v", p.vm.input_used},
-                         {"d", p.dm.input_used},
-                         {"a", p.am.input_used},
-                         {"f", p.fm.input_used}}},
-               {"rules_applied", rules}};
+    if (m->rule != BoundaryRule::none) w.value(boundary_rule_code(m->rule));
+  w.end_array();
+  w.end_object();
 }
 
-ojson warnings_json(const std::vector<Warning>& ws) {
-  ojson out = ojson::array();
-  for (const Warning& w : ws) out.push_back({{"code", w.code}, {"message", w.message}});
-  return out;
+void write_warnings(JsonWriter& w, const std::vector<Warning>& ws, UnitSystem u) {
+  w.begin_array();
+  for (const Warning& x : ws) w.begin_object().field("code", warning_code(x)).field("message", describe_warning(x, u)).end_object();
+  w.end_array();
 }
 
-ojson job_json(const LiftJob& job, const JobAssessment& ja, const RiskBands& bands) {
-  ojson tasks = ojson::array();
+void write_lift_point(JsonWriter& w, const LiftPoint& p) {
+  w.begin_object().field("h", p.h).field("v", p.v).field("a", p.a_deg).end_object();
+}
+
+void write_job(JsonWriter& w, const LiftJob& job, const JobAssessment& ja, const RiskBands& bands, UnitSystem u) {
+  w.begin_object();
+  w.field("id", ja.id);
+  if (job.name) w.field("name", *job.name);
+  w.key("duration").begin_object();
+  if (ja.duration.category) w.field("category", duration_name(*ja.duration.category));
+  else w.key("category").null();
+  w.field("declared", ja.duration_declared);
+  if (ja.duration_declared) w.key("longest_lifting_min").null();
+  else w.field("longest_lifting_min", ja.duration.longest_lifting_min);
+  w.field("rule", duration_rule_name(ja.duration.rule)).field("explanation", ja.duration.explanation);
+  w.end_object();
+  w.key("tasks").begin_array();
   for (std::size_t i = 0; i < ja.tasks.size(); ++i) {
     const LiftTask& t = job.tasks[i];
     const TaskResult& r = ja.tasks[i];
-    ojson task{{"id", r.id},
-               {"load", t.load},
-               {"max_load", t.max_load ? ojson(*t.max_load) : ojson(nullptr)},
-               {"frequency", t.frequency_per_min},
-               {"coupling", coupling_name(t.coupling)},
-               {"control_at_destination", t.control_at_destination},
-               {"input", {{"origin", {{"h", t.origin.h}, {"v", t.origin.v}, {"a", t.origin.a_deg}}},
-                          {"destination", {{"h", t.destination.h}, {"v", t.destination.v}, {"a", t.destination.a_deg}}}}}};
-    if (const auto& s = job.frequency_samples[i])
-      task["frequency_sample"] = {{"lifts_per_min", s->lifts_per_min},
-                                  {"lifting_min", s->lifting_min},
-                                  {"sample_min", s->sample_min}};
-    task["origin"] = point_json(r.origin);
-    task["destination"] = point_json(r.destination);
-    task["governing"] = lift_end_name(r.governing);
-    task["li"] = opt(r.li);
-    task["band"] = band_name(find_band(r.li, bands));
-    task["outside_equation"] = r.outside_equation;
-    task["within_limits_of_application"] = r.within_limits_of_application;
-    task["warnings"] = warnings_json(r.warnings);
-    tasks.push_back(std::move(task));
+    w.begin_object();
+    w.field("id", r.id).field("load", t.load).field("max_load", t.max_load).field("frequency", t.frequency_per_min);
+    w.field("coupling", coupling_name(t.coupling)).field("control_at_destination", t.control_at_destination);
+    w.key("input").begin_object();
+    w.key("origin");
+    write_lift_point(w, t.origin);
+    w.key("destination");
+    write_lift_point(w, t.destination);
+    w.end_object();
+    if (const auto& s = job.frequency_samples[i]) {
+      w.key("frequency_sample").begin_object();
+      w.field("lifts_per_min", s->lifts_per_min).field("lifting_min", s->lifting_min).field("sample_min", s->sample_min);
+      w.end_object();
+    }
+    w.key("origin");
+    write_point(w, r.origin);
+    w.key("destination");
+    write_point(w, r.destination);
+    w.field("governing", lift_end_name(r.governing)).field("li", r.li).field("band", band_name(find_band(r.li, bands)));
+    w.field("outside_equation", r.outside_equation).field("within_limits_of_application", r.within_limits_of_application);
+    w.key("warnings");
+    write_warnings(w, r.warnings, u);
+    w.end_object();
   }
-  ojson j{{"id", ja.id}};
-  if (job.name) j["name"] = *job.name;
-  j["duration"] = {{"category", ja.duration.category ? ojson(duration_name(*ja.duration.category)) : ojson(nullptr)},
-                   {"declared", ja.duration_declared},
-                   {"longest_lifting_min", ja.duration_declared ? ojson(nullptr) : ojson(ja.duration.longest_lifting_min)},
-                   {"rule", duration_rule_name(ja.duration.rule)},
-                   {"explanation", ja.duration.explanation}};
-  j["tasks"] = std::move(tasks);
+  w.end_array();
   if (ja.composite) {
-    j["cli"] = opt(ja.composite->cli);
-    j["cli_band"] = band_name(find_band(ja.composite->cli, bands));
-    if (ja.composite->undefined_reason) j["cli_undefined_reason"] = *ja.composite->undefined_reason;
-    ojson terms = ojson::array();
-    for (const CompositeTerm& t : ja.composite->terms)
-      terms.push_back({{"task", t.id},
-                       {"fili", opt(t.fili)},
-                       {"stli", opt(t.stli)},
-                       {"frequency", t.frequency_per_min},
-                       {"cumulative_frequency", t.cumulative_frequency_per_min},
-                       {"fm_cumulative", t.fm_cumulative},
-                       {"increment", t.increment}});
-    j["cli_terms"] = std::move(terms);
+    const CompositeResult& c = *ja.composite;
+    w.field("cli", c.cli).field("cli_band", band_name(find_band(c.cli, bands)));
+    if (c.undefined_reason) w.field("cli_undefined_reason", *c.undefined_reason);
+    w.key("cli_terms").begin_array();
+    for (const CompositeTerm& t : c.terms) {
+      w.begin_object().field("task", t.id).field("fili", t.fili).field("stli", t.stli);
+      w.field("frequency", t.frequency_per_min).field("cumulative_frequency", t.cumulative_frequency_per_min);
+      w.field("fm_cumulative", t.fm_cumulative).field("increment", t.increment).end_object();
+    }
+    w.end_array();
   }
-  j["warnings"] = warnings_json(ja.warnings);
-  return j;
+  w.key("warnings");
+  write_warnings(w, ja.warnings, u);
+  w.end_object();
 }
 
 std::string fixed(double x, int decimals) {
@@ -113,36 +110,49 @@ std::string pad_right(const std::string& s, std::size_t w) { return s.size() >= 
 
 std::string write_assessment_json(const Project& project, const ProjectAssessment& a, const OutputHeader& h) {
   const UnitSystem u = a.units;
-  ojson head{{"rackreach_output", 1},
-             {"engine", {{"name", "rackreach"}, {"version", engine_version}, {"method", lifting_method_text}}},
-             {"input", h.input_name},
-             {"units", {{"system", unit_system_name(u)},
-                        {"length", length_unit(u)},
-                        {"mass", mass_unit(u)},
-                        {"angle", "deg"},
-                        {"frequency", "lifts/min"}}},
-             {"rounding", a.rounding == RoundingMode::full ? "full" : "worksheet"},
-             {"duration_rule", duration_rule_name(a.duration_rule)},
-             {"bands", {{"elevated_above", a.bands.elevated_above},
-                        {"high_above", a.bands.high_above},
-                        {"very_high_above", a.bands.very_high_above}}},
-             {"caution", caution_text}};
-  // Jobs are written one at a time so that a large file never holds its whole output as a JSON tree.
-  std::string out = head.dump(2);
-  out.pop_back();  // the closing brace
-  while (!out.empty() && (out.back() == '\n' || out.back() == ' ')) out.pop_back();
-  out += ",\n  \"jobs\": [";
-  ojson all_warnings = ojson::array();
+  std::string out;
+  out.reserve(1024 + a.jobs.size() * 1500);
+  JsonWriter w(out);
+  // One job per line: a large output stays readable with line tools.
+  w.begin_object();
+  w.field("rackreach_output", 1);
+  w.line_break("\n ");
+  w.key("engine").begin_object().field("name", "rackreach").field("version", engine_version);
+  w.field("method", lifting_method_text).end_object();
+  w.line_break("\n ");
+  w.field("input", h.input_name);
+  w.line_break("\n ");
+  w.key("units").begin_object().field("system", unit_system_name(u)).field("length", length_unit(u));
+  w.field("mass", mass_unit(u)).field("angle", "deg").field("frequency", "lifts/min").end_object();
+  w.line_break("\n ");
+  w.field("rounding", a.rounding == RoundingMode::full ? "full" : "worksheet");
+  w.field("duration_rule", duration_rule_name(a.duration_rule));
+  w.line_break("\n ");
+  w.key("bands").begin_object().field("elevated_above", a.bands.elevated_above);
+  w.field("high_above", a.bands.high_above).field("very_high_above", a.bands.very_high_above).end_object();
+  w.line_break("\n ");
+  w.field("caution", caution_text);
+  w.line_break("\n ");
+  w.key("jobs").begin_array();
   for (std::size_t i = 0; i < a.jobs.size(); ++i) {
-    const JobAssessment& ja = a.jobs[i];
-    out += i == 0 ? "\n    " : ",\n    ";
-    out += job_json(project.jobs[i], ja, a.bands).dump();
-    for (const Warning& w : ja.warnings) all_warnings.push_back({{"code", w.code}, {"job", ja.id}, {"message", w.message}});
-    for (const TaskResult& t : ja.tasks)
-      for (const Warning& w : t.warnings)
-        all_warnings.push_back({{"code", w.code}, {"job", ja.id}, {"task", t.id}, {"message", w.message}});
+    w.line_break("\n  ");
+    write_job(w, project.jobs[i], a.jobs[i], a.bands, u);
   }
-  out += "\n  ],\n  \"warnings\": " + all_warnings.dump() + "\n}\n";
+  out += "\n ";
+  w.end_array();
+  w.line_break("\n ");
+  // Every warning once more, by code and place, for programs that only scan for codes; the words are in the jobs.
+  w.key("warnings").begin_array();
+  for (const JobAssessment& ja : a.jobs) {
+    for (const Warning& x : ja.warnings) w.begin_object().field("code", warning_code(x)).field("job", ja.id).end_object();
+    for (const TaskResult& t : ja.tasks)
+      for (const Warning& x : t.warnings)
+        w.begin_object().field("code", warning_code(x)).field("job", ja.id).field("task", t.id).end_object();
+  }
+  w.end_array();
+  out += "\n";
+  w.end_object();
+  out += "\n";
   return out;
 }
 
@@ -230,9 +240,11 @@ std::string write_assessment_table(const Project& project, const ProjectAssessme
     for (const TaskResult& r : ja.tasks) any = any || !r.warnings.empty();
     if (any) {
       s += "  Warnings:\n";
-      for (const Warning& w : ja.warnings) s += "    - " + w.message + " [" + w.code + "]\n";
+      for (const Warning& w : ja.warnings)
+        s += "    - " + describe_warning(w, u) + " [" + std::string(warning_code(w)) + "]\n";
       for (const TaskResult& r : ja.tasks)
-        for (const Warning& w : r.warnings) s += "    - task \"" + r.id + "\": " + w.message + " [" + w.code + "]\n";
+        for (const Warning& w : r.warnings)
+          s += "    - task \"" + r.id + "\": " + describe_warning(w, u) + " [" + std::string(warning_code(w)) + "]\n";
     }
   }
   s += "\nCaution: " + std::string(caution_text) + "\n";
@@ -275,7 +287,7 @@ std::string write_assessment_csv(const Project& project, const ProjectAssessment
       const TaskResult& r = ja.tasks[ti];
       const LiftTask& t = job.tasks[ti];
       std::string codes;
-      for (const Warning& w : r.warnings) codes += (codes.empty() ? "" : ";") + w.code;
+      for (const Warning& w : r.warnings) codes += (codes.empty() ? "" : ";") + std::string(warning_code(w));
       for (LiftEnd end : {LiftEnd::origin, LiftEnd::destination}) {
         const PointResult& p = end == LiftEnd::origin ? r.origin : r.destination;
         const LiftPoint& lp = end == LiftEnd::origin ? t.origin : t.destination;

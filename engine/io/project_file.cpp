@@ -74,7 +74,26 @@ class ProjectLoader {
  public:
   explicit ProjectLoader(std::vector<Problem>& problems) : r_(problems), problems_(problems) {}
 
-  std::optional<Project> load(const json& doc) {
+  /// Units used in messages and rules of jobs loaded before the root object is complete.
+  void set_units(UnitSystem u) { units_ = u; }
+
+  /// Validates one element of the jobs array and keeps it if it is valid.
+  void add_job(const json& j, std::size_t index) {
+    const JsonPath root;
+    const JsonPath jobs_path(root, "jobs");
+    const JsonPath job_path(jobs_path, index);
+    ++jobs_seen_;
+    if (auto job = load_job(j, job_path)) {
+      if (!job_ids_.insert(job->id).second)
+        problems_.push_back({"duplicate_id", JsonPath(job_path, "id").str(), "\"" + job->id + "\"",
+                             "job ids must be unique in the file", ""});
+      jobs_.push_back(std::move(*job));
+    }
+  }
+
+  /// Validates the root object. When the parser handed the jobs over one by one (`jobs_streamed`), their array
+  /// in `doc` is empty and the jobs are already loaded; otherwise they are loaded from `doc` here.
+  std::optional<Project> finish(const json& doc, bool jobs_streamed) {
     const JsonPath root;
     if (!r_.object(doc, root,
                    {"rackreach", "units", "title", "site", "assessor", "date", "duration_rule", "jobs"}))
@@ -97,21 +116,14 @@ class ProjectLoader {
 
     if (const json* jobs = r_.member(doc, root, "jobs", true)) {
       const JsonPath jobs_path(root, "jobs");
-      if (r_.array(*jobs, jobs_path, 1, "jobs")) {
-        std::set<std::string> ids;
-        p.jobs.reserve(jobs->size());
-        for (std::size_t i = 0; i < jobs->size(); ++i) {
-          const JsonPath job_path(jobs_path, i);
-          if (auto job = load_job((*jobs)[i], job_path)) {
-            if (!ids.insert(job->id).second)
-              problems_.push_back({"duplicate_id", JsonPath(job_path, "id").str(), "\"" + job->id + "\"",
-                                   "job ids must be unique in the file", ""});
-            p.jobs.push_back(std::move(*job));
-          }
-        }
+      if (jobs_streamed) {
+        if (jobs_seen_ == 0) r_.add("empty", jobs_path, jobs, "must hold at least 1 jobs");
+      } else if (r_.array(*jobs, jobs_path, 1, "jobs")) {
+        for (std::size_t i = 0; i < jobs->size(); ++i) add_job((*jobs)[i], i);
       }
     }
     if (!problems_.empty()) return std::nullopt;
+    p.jobs = std::move(jobs_);
     return p;
   }
 
@@ -282,15 +294,49 @@ class ProjectLoader {
   JsonReader r_;
   std::vector<Problem>& problems_;
   UnitSystem units_ = UnitSystem::metric;
+  std::vector<LiftJob> jobs_;
+  std::set<std::string> job_ids_;
+  std::size_t jobs_seen_ = 0;
 };
 
 }  // namespace
 
 LoadResult load_project_text(std::string_view text) {
   LoadResult out;
+  ProjectLoader loader(out.problems);
+  // The parser hands each element of the root's "jobs" array to the loader as soon as it is complete and then
+  // drops it, so the document tree never holds more than one job: a large file is parsed and validated in one
+  // pass, in little memory. Jobs that come before the root's "units" wait until the end.
+  std::string root_key;
+  bool in_jobs = false, jobs_streamed = false;
+  std::optional<UnitSystem> units;
+  std::size_t position = 0;
+  std::vector<std::pair<std::size_t, json>> waiting;
+  auto on_event = [&](int depth, json::parse_event_t ev, json& parsed) {
+    using E = json::parse_event_t;
+    if (depth == 1) {
+      if (ev == E::key) root_key = parsed.get<std::string>();
+      else if (ev == E::array_start && root_key == "jobs") in_jobs = jobs_streamed = true;
+      else if (ev == E::array_end) in_jobs = false;
+      else if (ev == E::value && root_key == "units" && parsed.is_string() && !units) {
+        const std::string& u = parsed.get_ref<const std::string&>();
+        if (u == "metric" || u == "us") {
+          units = u == "metric" ? UnitSystem::metric : UnitSystem::us;
+          loader.set_units(*units);
+        }
+      }
+      return true;
+    }
+    if (in_jobs && depth == 2 && (ev == E::object_end || ev == E::array_end || ev == E::value)) {
+      if (units) loader.add_job(parsed, position++);
+      else waiting.emplace_back(position++, std::move(parsed));
+      return false;
+    }
+    return true;
+  };
   json doc;
   try {
-    doc = json::parse(text.begin(), text.end());
+    doc = json::parse(text.begin(), text.end(), on_event);
   } catch (const json::parse_error& e) {
     // nlohmann's message starts "[json.exception.parse_error.101] parse error at line 3, column 7: ..."
     std::string what = e.what();
@@ -298,14 +344,17 @@ LoadResult load_project_text(std::string_view text) {
     if (colon != std::string::npos) what = what.substr(colon + 2);
     const auto detail = what.find(": ");  // drop nlohmann's own "parse error at line L, column C" prefix
     if (what.rfind("parse error", 0) == 0 && detail != std::string::npos) what = what.substr(detail + 2);
+    out.problems.clear();  // what the loader saw of a broken file is not worth reporting
     out.problems.push_back({"parse_error", find_parse_error_path(text), "",
                             "the file is not valid JSON (" + line_and_column(text, e.byte ? e.byte - 1 : 0) + "): " +
                                 what,
                             ""});
     return out;
   }
-  ProjectLoader loader(out.problems);
-  out.project = loader.load(doc);
+  if (!units && doc.is_object())
+    if (auto it = doc.find("units"); it != doc.end() && *it == "us") loader.set_units(UnitSystem::us);
+  for (auto& [index, job] : waiting) loader.add_job(job, index);
+  out.project = loader.finish(doc, jobs_streamed);
   return out;
 }
 

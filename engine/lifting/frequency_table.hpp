@@ -68,7 +68,26 @@ struct FrequencyMultiplier {
 /// FM for F lifts/min (F > 0), a duration category and the origin-height column. Pure; no rounding.
 FrequencyMultiplier calc_fm(double lifts_per_min, DurationCategory duration, bool origin_v_at_or_above_split);
 
-/// The largest F with a non-zero FM in a column (the "last non-zero row").
-double find_last_nonzero_frequency(DurationCategory duration, bool origin_v_at_or_above_split);
+// calc_fm finds the row by arithmetic: rows 0.2, 0.5, then 1, 2, ..., 15 in steps of 1.
+static_assert([] {
+  if (frequency_table_5[0].lifts_per_min != 0.2 || frequency_table_5[1].lifts_per_min != 0.5) return false;
+  for (std::size_t i = 2; i < frequency_table_5.size(); ++i)
+    if (frequency_table_5[i].lifts_per_min != static_cast<double>(i - 1)) return false;
+  return true;
+}());
+
+/// The largest F with a non-zero FM in each column (the "last non-zero row"), derived from the table at compile time.
+inline constexpr std::array<double, 6> last_nonzero_frequency = [] {
+  std::array<double, 6> last{};
+  for (int col = 0; col < 6; ++col)
+    for (const auto& row : frequency_table_5)
+      if (row.fm[col] > 0.0) last[col] = row.lifts_per_min;
+  return last;
+}();
+
+/// The largest F with a non-zero FM in a column.
+constexpr double find_last_nonzero_frequency(DurationCategory duration, bool origin_v_at_or_above_split) {
+  return last_nonzero_frequency[frequency_column(duration, origin_v_at_or_above_split)];
+}
 
 }  // namespace rackreach

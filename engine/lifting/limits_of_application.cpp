@@ -1,49 +1,26 @@
 // SPDX-License-Identifier: MIT
 #include "engine/lifting/limits_of_application.hpp"
 
-#include <cstdio>
-
 namespace rackreach {
-namespace {
 
-std::string fmt(const char* pattern, double a) {
-  char buf[200];
-  std::snprintf(buf, sizeof buf, pattern, a);
-  return buf;
-}
-
-}  // namespace
-
-std::vector<LimitFinding> find_limit_findings(const LimitsOfApplication& l) {
-  std::vector<LimitFinding> out;
-  auto flag = [&](const std::optional<bool>& v, const char* code, const char* msg) {
-    if (v.value_or(false)) out.push_back({code, msg});
+void add_limit_warnings(const LimitsOfApplication& l, std::vector<Warning>& out) {
+  auto flag = [&](const std::optional<bool>& v, WarningKind kind) {
+    if (v.value_or(false)) out.push_back({kind, LiftEnd::origin, 1.0, 0.0, {}});
   };
-  flag(l.one_handed, "limit.one_handed", "lifting with one hand: outside the equation's limits of application");
-  flag(l.seated_or_kneeling, "limit.seated_or_kneeling",
-       "lifting while seated or kneeling: outside the equation's limits of application");
-  flag(l.restricted_space, "limit.restricted_space",
-       "lifting in a restricted work space: outside the equation's limits of application");
-  flag(l.unstable_load, "limit.unstable_load", "unstable object: outside the equation's limits of application");
-  flag(l.wheelbarrow_or_shovel, "limit.wheelbarrow_or_shovel",
-       "wheelbarrow or shovel: outside the equation's limits of application");
-  flag(l.high_speed, "limit.high_speed",
-       "high-speed lifting (faster than about 76 cm/s): outside the equation's limits of application");
+  flag(l.one_handed, WarningKind::one_handed);
+  flag(l.seated_or_kneeling, WarningKind::seated_or_kneeling);
+  flag(l.restricted_space, WarningKind::restricted_space);
+  flag(l.unstable_load, WarningKind::unstable_load);
+  flag(l.wheelbarrow_or_shovel, WarningKind::wheelbarrow_or_shovel);
+  flag(l.high_speed, WarningKind::high_speed);
   if (l.carry_push_share && *l.carry_push_share > max_carry_push_share)
-    out.push_back({"limit.carry_push_share",
-                   fmt("carrying, pushing or pulling is %.0f%% of the work (the equation assumes at most about 10%%)",
-                       *l.carry_push_share * 100.0)});
+    out.push_back({WarningKind::carry_push_share, LiftEnd::origin, *l.carry_push_share, max_carry_push_share, {}});
   if (l.floor_friction && *l.floor_friction < min_floor_friction)
-    out.push_back({"limit.floor_friction",
-                   fmt("foot-floor coefficient of friction %.2f is below 0.4: outside the equation's limits",
-                       *l.floor_friction)});
+    out.push_back({WarningKind::floor_friction, LiftEnd::origin, *l.floor_friction, min_floor_friction, {}});
   if (l.temperature_c && (*l.temperature_c < min_temperature_c || *l.temperature_c > max_temperature_c))
-    out.push_back({"limit.temperature",
-                   fmt("temperature %.1f C is outside 19-26 C: outside the equation's limits", *l.temperature_c)});
+    out.push_back({WarningKind::temperature, LiftEnd::origin, *l.temperature_c, 0.0, {}});
   if (l.humidity_pct && (*l.humidity_pct < min_humidity_pct || *l.humidity_pct > max_humidity_pct))
-    out.push_back({"limit.humidity",
-                   fmt("relative humidity %.0f%% is outside 35-50%%: outside the equation's limits", *l.humidity_pct)});
-  return out;
+    out.push_back({WarningKind::humidity, LiftEnd::origin, *l.humidity_pct, 0.0, {}});
 }
 
 }  // namespace rackreach

@@ -10,6 +10,8 @@
 #include <string>
 #include <vector>
 
+#include "engine/lifting/warning.hpp"
+
 namespace rackreach {
 
 struct LimitsOfApplication {
@@ -34,12 +36,7 @@ inline constexpr double min_humidity_pct = 35.0;
 inline constexpr double max_humidity_pct = 50.0;
 inline constexpr double max_lift_speed_cm_per_s = 76.0;
 
-struct LimitFinding {
-  std::string code;     ///< e.g. "limit.one_handed"
-  std::string message;  ///< plain words, with the threshold
-};
-
-/// Every limit of application that applies to a task, in a fixed order.
-std::vector<LimitFinding> find_limit_findings(const LimitsOfApplication& limits);
+/// Appends a warning for every limit of application that applies to a task, in a fixed order.
+void add_limit_warnings(const LimitsOfApplication& limits, std::vector<Warning>& out);
 
 }  // namespace rackreach

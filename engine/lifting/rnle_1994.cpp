@@ -2,7 +2,6 @@
 #include "engine/lifting/rnle_1994.hpp"
 
 #include <cmath>
-#include <cstdio>
 
 namespace rackreach {
 
@@ -66,45 +65,23 @@ std::optional<double> divide(double load, double limit, RoundingMode mode) {
   return round_result(load / limit, mode);
 }
 
-std::string fmt_num(double x) {
-  char buf[32];
-  std::snprintf(buf, sizeof buf, "%g", x);
-  return buf;
-}
-
-/// Why a zero multiplier makes the task fall outside the equation, in plain words with the limit.
-std::optional<Warning> describe_zero(const char* name, const Multiplier& m, UnitSystem units, const RnleConstants& k,
-                                     std::optional<DurationCategory> duration, double origin_v) {
-  // More than 8 h has its own limit-of-application warning; a zero FM is not a second finding.
-  if (m.value != 0.0 || m.rule == BoundaryRule::duration_over_8h) return std::nullopt;
-  const std::string len{length_unit(units)};
-  std::string why;
-  switch (m.rule) {
-    case BoundaryRule::h_beyond_max:
-      why = "H " + fmt_num(m.input_used) + " " + len + " is beyond " + fmt_num(k.h_max) + " " + len;
-      break;
-    case BoundaryRule::v_beyond_max:
-      why = "V " + fmt_num(m.input_used) + " " + len + " is above " + fmt_num(k.v_max) + " " + len;
-      break;
-    case BoundaryRule::d_beyond_max:
-      why = "D " + fmt_num(m.input_used) + " " + len + " is beyond " + fmt_num(k.d_max) + " " + len;
-      break;
-    case BoundaryRule::a_beyond_max: why = "A " + fmt_num(m.input_used) + " deg is beyond 135 deg"; break;
-    case BoundaryRule::f_beyond_table:
-      why = "F " + fmt_num(m.input_used) + " lifts/min is above " +
-            fmt_num(find_last_nonzero_frequency(*duration, origin_v >= k.v_split)) +
-            ", the last non-zero row of Table 5 for " + std::string(duration_name(*duration)) + " duration, V " +
-            (origin_v >= k.v_split ? ">= " : "< ") + fmt_num(k.v_split) + " " + len;
-      break;
-    default: why = "multiplier is zero"; break;
-  }
-  return Warning{std::string("outside.") + name, std::string(name) + " = 0: " + why};
+/// The warning of a zero multiplier at one end: which multiplier, its input and the bound it passed.
+/// More than 8 h has its own limit-of-application warning; its zero FM is not a second finding.
+void add_zero_warnings(const PointResult& p, LiftEnd end, const RnleConstants& k, std::optional<DurationCategory> duration,
+                       double origin_v, std::vector<Warning>& out) {
+  if (p.hm.value == 0.0) out.push_back({WarningKind::hm_zero, end, p.hm.input_used, k.h_max, {}});
+  if (p.vm.value == 0.0) out.push_back({WarningKind::vm_zero, end, p.vm.input_used, k.v_max, {}});
+  if (p.dm.value == 0.0) out.push_back({WarningKind::dm_zero, end, p.dm.input_used, k.d_max, {}});
+  if (p.am.value == 0.0) out.push_back({WarningKind::am_zero, end, p.am.input_used, a_max_deg, {}});
+  if (p.fm.value == 0.0 && duration)
+    out.push_back({WarningKind::fm_zero, end, p.fm.input_used,
+                   find_last_nonzero_frequency(*duration, origin_v >= k.v_split), {}});
 }
 
 }  // namespace
 
-PointResult calc_point(const LiftTask& task, const LiftPoint& point, double origin_v, double d,
-                       std::optional<DurationCategory> duration, UnitSystem units, RoundingMode mode) {
+PointResult calc_point(const LiftTask& task, const LiftPoint& point, const Multiplier& dm, const Multiplier& fm,
+                       UnitSystem units, RoundingMode mode) {
   const RnleConstants& k = find_constants(units);
   PointResult r;
   auto keep = [mode](Multiplier m) {
@@ -113,9 +90,9 @@ PointResult calc_point(const LiftTask& task, const LiftPoint& point, double orig
   };
   r.hm = keep(calc_hm(point.h, k));
   r.vm = keep(calc_vm(point.v, k));
-  r.dm = keep(calc_dm(d, k));
+  r.dm = dm;
   r.am = keep(calc_am(point.a_deg));
-  r.fm = keep(calc_fm_multiplier(task.frequency_per_min, duration, origin_v, k));
+  r.fm = fm;
   r.cm = Multiplier{calc_cm(task.coupling, point.v >= k.v_split), point.v, BoundaryRule::none};
   const double firwl_raw = k.lc * r.hm.value * r.vm.value * r.dm.value * r.am.value * r.cm.value;
   r.firwl = round_result(firwl_raw, mode);
@@ -132,39 +109,25 @@ TaskResult evaluate_task(const LiftTask& task, std::optional<DurationCategory> d
   const RnleConstants& k = find_constants(units);
   TaskResult r;
   r.id = task.id;
-  const double d = std::abs(task.destination.v - task.origin.v);
-  r.origin = calc_point(task, task.origin, task.origin.v, d, duration, units, mode);
-  r.destination = calc_point(task, task.destination, task.origin.v, d, duration, units, mode);
+  // D is the travel between the ends, and FM takes V at the origin: both are the same at either end.
+  Multiplier dm = calc_dm(std::abs(task.destination.v - task.origin.v), k);
+  dm.value = round_multiplier(dm.value, mode);
+  Multiplier fm = calc_fm_multiplier(task.frequency_per_min, duration, task.origin.v, k);
+  fm.value = round_multiplier(fm.value, mode);
+  r.origin = calc_point(task, task.origin, dm, fm, units, mode);
+  r.destination = calc_point(task, task.destination, dm, fm, units, mode);
   // Significant control: the lower RWL of the two ends governs (Applications Manual 1.3); ties stay at the origin.
   r.governing = task.control_at_destination && r.destination.rwl < r.origin.rwl ? LiftEnd::destination : LiftEnd::origin;
   const PointResult& g = r.governing_point();
   r.li = g.li;
 
-  auto add_zero_warnings = [&](const PointResult& p, LiftEnd end) {
-    const char* names[] = {"HM", "VM", "DM", "AM", "FM"};
-    const Multiplier* ms[] = {&p.hm, &p.vm, &p.dm, &p.am, &p.fm};
-    for (int i = 0; i < 5; ++i)
-      if (auto w = describe_zero(names[i], *ms[i], units, k, duration, task.origin.v)) {
-        const std::string_view end_name = lift_end_name(end);
-        w->code.append(".").append(end_name);
-        std::string message = "at the ";
-        message.append(end_name).append(", ").append(w->message);
-        r.warnings.push_back({std::move(w->code), std::move(message)});
-      }
-  };
-  add_zero_warnings(r.origin, LiftEnd::origin);
+  add_zero_warnings(r.origin, LiftEnd::origin, k, duration, task.origin.v, r.warnings);
   // The destination is always shown; its zero multipliers decide the LI only with significant control.
-  if (task.control_at_destination) add_zero_warnings(r.destination, LiftEnd::destination);
+  if (task.control_at_destination) add_zero_warnings(r.destination, LiftEnd::destination, k, duration, task.origin.v, r.warnings);
   r.outside_equation = !r.li.has_value();
-  if (!duration)
-    r.warnings.push_back({"limit.duration_over_8h",
-                          "lifting lasts more than 8 h: outside the equation (Table 5 stops at 8 h); FIRWL and FILI "
-                          "are shown, RWL and LI are not"});
-  for (auto& f : find_limit_findings(task.limits)) {
-    r.within_limits_of_application = false;
-    r.warnings.push_back({f.code, f.message});
-  }
-  if (!duration) r.within_limits_of_application = false;
+  if (!duration) r.warnings.push_back({WarningKind::duration_over_8h, LiftEnd::origin, 0.0, long_limit_hours, {}});
+  add_limit_warnings(task.limits, r.warnings);
+  for (const Warning& w : r.warnings) r.within_limits_of_application = r.within_limits_of_application && !w.is_limit_of_application();
   return r;
 }
 

@@ -26,6 +26,7 @@
 #include "engine/lifting/frequency_table.hpp"
 #include "engine/lifting/limits_of_application.hpp"
 #include "engine/lifting/rounding.hpp"
+#include "engine/lifting/warning.hpp"
 #include "engine/quantities.hpp"
 
 namespace rackreach {
@@ -51,6 +52,8 @@ inline constexpr RnleConstants rnle_us{51.0, 10.0, 25.0, 30.0, 0.0075, 70.0, 10.
 /// AM = 1 - 0.0032 A, A in degrees, 0 to 135 (Waters et al. 1993).
 inline constexpr double am_coef_per_deg = 0.0032;
 inline constexpr double a_max_deg = 135.0;
+/// Table 5 stops at 8 h of lifting (Applications Manual 1.3.5.2).
+inline constexpr double long_limit_hours = 8.0;
 /// DM's constant term (Waters et al. 1993), the same in both forms.
 inline constexpr double dm_constant = 0.82;
 
@@ -107,8 +110,6 @@ struct LiftTask {
   double fili_load() const { return max_load.value_or(load); }
 };
 
-enum class LiftEnd { origin, destination };
-constexpr std::string_view lift_end_name(LiftEnd e) { return e == LiftEnd::origin ? "origin" : "destination"; }
 
 /// Everything computed at one end of a lift. Weights in the task's mass unit.
 struct PointResult {
@@ -119,13 +120,6 @@ struct PointResult {
   std::optional<double> li;    ///< undefined where RWL = 0
   std::optional<double> fili;  ///< undefined where FIRWL = 0
   std::optional<double> stli;  ///< undefined where STRWL = 0
-};
-
-/// A coded warning: a limit of application, a boundary rule that makes the task outside the equation, or a
-/// flag of the method. `code` is stable; `message` is for people.
-struct Warning {
-  std::string code;
-  std::string message;
 };
 
 struct TaskResult {
@@ -141,10 +135,10 @@ struct TaskResult {
   const PointResult& governing_point() const { return governing == LiftEnd::origin ? origin : destination; }
 };
 
-/// Evaluates one end of a lift. `origin_v` feeds FM (Table 5 is indexed by V at the origin). `d` is the
-/// vertical travel |V_destination - V_origin|. Rounded per `mode`, each rounded value feeding the next step.
-PointResult calc_point(const LiftTask& task, const LiftPoint& point, double origin_v, double d,
-                       std::optional<DurationCategory> duration, UnitSystem units, RoundingMode mode);
+/// Evaluates one end of a lift, given DM and FM, which are the same at both ends (D is the travel between them;
+/// Table 5 is indexed by V at the origin). Rounded per `mode`, each rounded value feeding the next step.
+PointResult calc_point(const LiftTask& task, const LiftPoint& point, const Multiplier& dm, const Multiplier& fm,
+                       UnitSystem units, RoundingMode mode);
 
 /// Evaluates a task at both ends; the destination governs only with significant control and a lower RWL.
 /// `duration` empty means more than 8 h: the task is outside the equation (FM undefined), FIRWL/FILI still given.

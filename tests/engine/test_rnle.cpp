@@ -4,6 +4,7 @@
 // DHHS (NIOSH) 94-110 (revised 2021), Tables 1-5 and 7; [WPGF93] Waters et al. (1993), Ergonomics 36(7).
 
 #include <catch2/catch.hpp>
+#include <algorithm>
 #include <fstream>
 #include <sstream>
 #include <string>
@@ -255,8 +256,8 @@ TEST_CASE("RWL = 0 is outside the equation, with the multiplier and the reason, 
   CHECK_FALSE(r.li.has_value());
   CHECK(r.outside_equation);
   REQUIRE_FALSE(r.warnings.empty());
-  CHECK(r.warnings[0].code == "outside.HM.origin");
-  CHECK_THAT(r.warnings[0].message, Catch::Matchers::Contains("H 70 cm is beyond 63 cm"));
+  CHECK(warning_code(r.warnings[0]) == "outside.HM.origin");
+  CHECK_THAT(describe_warning(r.warnings[0], UnitSystem::metric), Catch::Matchers::Contains("H 70 cm is beyond 63 cm"));
 }
 
 TEST_CASE("More than 8 h is outside the equation; FIRWL and FILI are still given", "[rnle][duration]") {
@@ -273,7 +274,7 @@ TEST_CASE("More than 8 h is outside the equation; FIRWL and FILI are still given
   CHECK_THAT(r.origin.firwl, WithinAbs(23.0 * 25.0 / 30.0, 1e-9));
   REQUIRE(r.origin.fili);
   bool found = false;
-  for (const auto& w : r.warnings) found = found || w.code == "limit.duration_over_8h";
+  for (const auto& w : r.warnings) found = found || warning_code(w) == "limit.duration_over_8h";
   CHECK(found);
 }
 
@@ -288,7 +289,7 @@ TEST_CASE("Limits of application put a coded warning on the task", "[rnle][limit
   auto codes = [&] {
     std::vector<std::string> out;
     for (const auto& w : evaluate_task(t, DurationCategory::short_duration, UnitSystem::metric, RoundingMode::full).warnings)
-      out.push_back(w.code);
+      out.push_back(std::string(warning_code(w)));
     return out;
   };
   CHECK(codes().empty());
