@@ -111,7 +111,6 @@ std::string pad_right(const std::string& s, std::size_t w) { return s.size() >= 
 std::string write_assessment_json(const Project& project, const ProjectAssessment& a, const OutputHeader& h) {
   const UnitSystem u = a.units;
   std::string out;
-  out.reserve(1024 + a.jobs.size() * 1500);
   JsonWriter w(out);
   // One job per line: a large output stays readable with line tools.
   w.begin_object();
@@ -138,7 +137,7 @@ std::string write_assessment_json(const Project& project, const ProjectAssessmen
     w.line_break("\n  ");
     write_job(w, project.jobs[i], a.jobs[i], a.bands, u);
   }
-  out += "\n ";
+  w.raw("\n ");
   w.end_array();
   w.line_break("\n ");
   // Every warning once more, by code and place, for programs that only scan for codes; the words are in the jobs.
@@ -150,9 +149,10 @@ std::string write_assessment_json(const Project& project, const ProjectAssessmen
         w.begin_object().field("code", warning_code(x)).field("job", ja.id).field("task", t.id).end_object();
   }
   w.end_array();
-  out += "\n";
+  w.raw("\n");
   w.end_object();
-  out += "\n";
+  w.raw("\n");
+  w.finish();
   return out;
 }
 

@@ -5,7 +5,9 @@
 // Numbers use the shortest text that reads back to the same double. Non-finite numbers are written as null
 // (JSON has no NaN).
 
+#include <algorithm>
 #include <charconv>
+#include <cstring>
 #include <cmath>
 #include <optional>
 #include <string>
@@ -16,17 +18,37 @@ namespace rackreach {
 
 class JsonWriter {
  public:
-  explicit JsonWriter(std::string& out) : out_(out) {}
+  /// Appends to `out`; call finish() (or let the writer go out of scope) before reading `out`.
+  explicit JsonWriter(std::string& out) : out_(out), len_(out.size()) {}
+  ~JsonWriter() { finish(); }
+  JsonWriter(const JsonWriter&) = delete;
+  JsonWriter& operator=(const JsonWriter&) = delete;
+
+  /// Trims the output string to what was written.
+  void finish() { out_.resize(len_); }
+
+  /// Text written as it is (layout between values).
+  JsonWriter& raw(std::string_view text) {
+    put(text);
+    return *this;
+  }
 
   JsonWriter& begin_object() { return open('{'); }
   JsonWriter& end_object() { return close('}'); }
   JsonWriter& begin_array() { return open('['); }
   JsonWriter& end_array() { return close(']'); }
 
+  /// A key. Keys are the program's own names (plain ASCII, nothing to escape), so they are copied as they are.
   JsonWriter& key(std::string_view k) {
     separate();
-    write_string(k);
-    out_ += ':';
+    reserve(k.size() + 3);
+    char* p = out_.data() + len_;
+    *p++ = '"';
+    std::memcpy(p, k.data(), k.size());
+    p += k.size();
+    *p++ = '"';
+    *p++ = ':';
+    len_ = static_cast<std::size_t>(p - out_.data());
     after_key_ = true;
     return *this;
   }
@@ -40,25 +62,25 @@ class JsonWriter {
   JsonWriter& value(const std::string& s) { return value(std::string_view(s)); }
   JsonWriter& value(bool b) {
     separate();
-    out_ += b ? "true" : "false";
+    put(b ? std::string_view("true") : std::string_view("false"));
     return *this;
   }
   JsonWriter& value(double x) {
     separate();
     if (!std::isfinite(x)) {
-      out_ += "null";
+      put("null");
       return *this;
     }
-    char buf[32];
-    const auto r = std::to_chars(buf, buf + sizeof buf, x);
-    out_.append(buf, r.ptr);
+    reserve(32);
+    const auto r = std::to_chars(out_.data() + len_, out_.data() + len_ + 32, x);
+    len_ = static_cast<std::size_t>(r.ptr - out_.data());
     return *this;
   }
   JsonWriter& value(int x) { return value(static_cast<double>(x)); }
   JsonWriter& value(const std::optional<double>& x) { return x ? value(*x) : null(); }
   JsonWriter& null() {
     separate();
-    out_ += "null";
+    put("null");
     return *this;
   }
 
@@ -75,12 +97,12 @@ class JsonWriter {
  private:
   JsonWriter& open(char c) {
     separate();
-    out_ += c;
+    put(c);
     first_.push_back(true);
     return *this;
   }
   JsonWriter& close(char c) {
-    out_ += c;
+    put(c);
     first_.pop_back();
     return *this;
   }
@@ -90,38 +112,55 @@ class JsonWriter {
       return;
     }
     if (!first_.empty()) {
-      if (!first_.back()) out_ += ',';
+      if (!first_.back()) put(',');
       first_.back() = false;
     }
-    out_ += pending_break_;
-    pending_break_ = {};
+    if (!pending_break_.empty()) {
+      put(pending_break_);
+      pending_break_ = {};
+    }
   }
   void write_string(std::string_view s) {
-    out_ += '"';
+    put('"');
     std::size_t run = 0;  // start of the run of characters that need no escape
     for (std::size_t i = 0; i < s.size(); ++i) {
       const auto c = static_cast<unsigned char>(s[i]);
       if (c >= 0x20 && c != '"' && c != '\\') continue;
-      out_.append(s.data() + run, i - run);
+      put(s.substr(run, i - run));
       run = i + 1;
       switch (c) {
-        case '"': out_ += "\\\""; break;
-        case '\\': out_ += "\\\\"; break;
-        case '\n': out_ += "\\n"; break;
-        case '\r': out_ += "\\r"; break;
-        case '\t': out_ += "\\t"; break;
+        case '"': put("\\\""); break;
+        case '\\': put("\\\\"); break;
+        case '\n': put("\\n"); break;
+        case '\r': put("\\r"); break;
+        case '\t': put("\\t"); break;
         default: {
           static constexpr char hex[] = "0123456789abcdef";
           const char esc[] = {'\\', 'u', '0', '0', hex[c >> 4], hex[c & 15]};
-          out_.append(esc, sizeof esc);
+          put(std::string_view(esc, sizeof esc));
         }
       }
     }
-    out_.append(s.data() + run, s.size() - run);
-    out_ += '"';
+    put(s.substr(run));
+    put('"');
+  }
+
+  /// Makes room for `n` more bytes; the string grows in large steps and is trimmed by finish().
+  void reserve(std::size_t n) {
+    if (len_ + n > out_.size()) out_.resize(std::max<std::size_t>(2 * out_.size(), len_ + n + 4096));
+  }
+  void put(char c) {
+    reserve(1);
+    out_[len_++] = c;
+  }
+  void put(std::string_view t) {
+    reserve(t.size());
+    std::memcpy(out_.data() + len_, t.data(), t.size());
+    len_ += t.size();
   }
 
   std::string& out_;
+  std::size_t len_;
   std::vector<bool> first_;
   bool after_key_ = false;
   std::string_view pending_break_;
