@@ -41,8 +41,9 @@ LoadedWorkforce load_workforce(std::string_view name_or_path, SexMix mix, const 
   LoadedPopulation main = load_population_file(file);
   if (!main.table) {
     if (is_shipped_name(name_or_path) && !std::filesystem::exists(file)) {
-      out.problems.push_back({std::string(name_or_path), "", "",
-                              "is not a shipped population table (see `rackreach population list`) nor a file"});
+      out.problems.push_back({"file_error", "", "",
+                              "is not a shipped population table (see `rackreach population list`) nor a file", "",
+                              std::string(name_or_path)});
     } else {
       out.problems = std::move(main.problems);
     }
@@ -53,10 +54,11 @@ LoadedWorkforce load_workforce(std::string_view name_or_path, SexMix mix, const 
   wf.mix = mix;
   for (Sex s : {Sex::female, Sex::male}) {
     if (mix.weight(s) > 0.0 && !wf.table->has_sex(s)) {
-      out.problems.push_back({file.string(), "subjects", "",
+      out.problems.push_back({"invalid_value", "subjects", "",
                               std::string("has no ") + std::string(sex_name(s)) +
                                   " subjects, so the workforce cannot include " +
-                                  (s == Sex::female ? "women" : "men")});
+                                  (s == Sex::female ? "women" : "men"),
+                              "", file.string()});
     }
   }
   if (!out.problems.empty()) return out;

@@ -36,7 +36,7 @@ std::filesystem::path find_population_file(std::string_view name_or_path, const 
 
 struct LoadedWorkforce {
   std::optional<Workforce> workforce;
-  std::vector<InputProblem> problems;
+  std::vector<Problem> problems;
   std::vector<std::string> notes;  ///< e.g. which dimension comes from which other table, and why
 };
 

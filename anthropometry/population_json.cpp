@@ -20,24 +20,24 @@ class Validator {
  public:
   explicit Validator(std::string file) : file_(std::move(file)) {}
 
-  void add(const std::string& path, const Json* value, const std::string& rule) {
-    problems_.push_back({file_, path, value ? value->dump() : std::string(), rule});
+  void add(const char* code, const std::string& path, const Json* value, const std::string& rule) {
+    problems_.push_back({code, path, value ? value->dump() : std::string(), rule, "", file_});
   }
-  std::vector<InputProblem> take() { return std::move(problems_); }
+  std::vector<Problem> take() { return std::move(problems_); }
   bool ok() const { return problems_.empty(); }
 
   void check_keys(const Json& obj, const std::string& path, std::initializer_list<const char*> allowed) {
     for (auto it = obj.begin(); it != obj.end(); ++it) {
       bool known = false;
       for (const char* a : allowed) known = known || it.key() == a;
-      if (!known) add(join(path, it.key()), &it.value(), "is not a known field here (allowed: " + list(allowed) + ")");
+      if (!known) add("unknown_key", join(path, it.key()), &it.value(), "is not a known field here (allowed: " + list(allowed) + ")");
     }
   }
 
   const Json* require(const Json& obj, const std::string& path, const char* key) {
     auto it = obj.find(key);
     if (it == obj.end()) {
-      add(join(path, key), nullptr, "is required");
+      add("missing_key", join(path, key), nullptr, "is required");
       return nullptr;
     }
     return &*it;
@@ -46,11 +46,11 @@ class Validator {
   std::optional<std::string> string_at(const Json& obj, const std::string& path, const char* key, bool required) {
     auto it = obj.find(key);
     if (it == obj.end()) {
-      if (required) add(join(path, key), nullptr, "is required");
+      if (required) add("missing_key", join(path, key), nullptr, "is required");
       return std::nullopt;
     }
     if (!it->is_string() || it->get<std::string>().empty()) {
-      add(join(path, key), &*it, "must be a non-empty string");
+      add("wrong_type", join(path, key), &*it, "must be a non-empty string");
       return std::nullopt;
     }
     return it->get<std::string>();
@@ -61,13 +61,13 @@ class Validator {
     auto it = obj.find(key);
     if (it == obj.end()) return out;
     if (!it->is_array()) {
-      add(join(path, key), &*it, "must be a list of strings");
+      add("wrong_type", join(path, key), &*it, "must be a list of strings");
       return out;
     }
     for (std::size_t i = 0; i < it->size(); ++i) {
       const Json& e = (*it)[i];
       if (!e.is_string() || e.get<std::string>().empty()) {
-        add(join(path, key) + "[" + std::to_string(i) + "]", &e, "must be a non-empty string");
+        add("wrong_type", join(path, key) + "[" + std::to_string(i) + "]", &e, "must be a non-empty string");
       } else {
         out.push_back(e.get<std::string>());
       }
@@ -79,7 +79,7 @@ class Validator {
     const Json* v = require(obj, path, key);
     if (!v) return std::nullopt;
     if (!v->is_number() || !std::isfinite(v->get<double>())) {
-      add(join(path, key), v, "must be a number");
+      add("wrong_type", join(path, key), v, "must be a number");
       return std::nullopt;
     }
     return v->get<double>();
@@ -89,7 +89,7 @@ class Validator {
     const Json* v = require(obj, path, key);
     if (!v) return std::nullopt;
     if (!v->is_number_integer() || v->get<long long>() < 1 || v->get<long long>() > 100000000) {
-      add(join(path, key), v, "must be a whole number of at least 1");
+      add("out_of_range", join(path, key), v, "must be a whole number of at least 1");
       return std::nullopt;
     }
     return v->get<int>();
@@ -107,7 +107,7 @@ class Validator {
   }
 
   std::string file_;
-  std::vector<InputProblem> problems_;
+  std::vector<Problem> problems_;
 };
 
 // Known dimensions whose quantity (length or mass) is fixed; any other name may be either.
@@ -118,7 +118,7 @@ bool is_known_mass_dimension(const std::string& key) {
 std::optional<SexDistribution> read_distribution(Validator& v, const Json& j, const std::string& path,
                                                  std::size_t n_percentiles, int subjects) {
   if (!j.is_object()) {
-    v.add(path, &j, "must be an object with n, mean, sd and quantiles");
+    v.add("wrong_type", path, &j, "must be an object with n, mean, sd and quantiles");
     return std::nullopt;
   }
   v.check_keys(j, path, {"n", "mean", "sd", "quantiles"});
@@ -127,7 +127,7 @@ std::optional<SexDistribution> read_distribution(Validator& v, const Json& j, co
   if (auto n = v.positive_int_at(j, path, "n")) {
     d.n = *n;
     if (*n > subjects) {
-      v.add(path + ".n", &j["n"], "must be at most the " + std::to_string(subjects) + " subjects of this sex");
+      v.add("out_of_range", path + ".n", &j["n"], "must be at most the " + std::to_string(subjects) + " subjects of this sex");
       good = false;
     }
   } else {
@@ -140,7 +140,7 @@ std::optional<SexDistribution> read_distribution(Validator& v, const Json& j, co
   if (auto s = v.number_at(j, path, "sd")) {
     d.sd = *s;
     if (*s < 0.0) {
-      v.add(path + ".sd", &j["sd"], "must be at least 0");
+      v.add("out_of_range", path + ".sd", &j["sd"], "must be at least 0");
       good = false;
     }
   } else {
@@ -150,7 +150,7 @@ std::optional<SexDistribution> read_distribution(Validator& v, const Json& j, co
   if (!q) return std::nullopt;
   const std::string qpath = path + ".quantiles";
   if (!q->is_array() || q->size() != n_percentiles) {
-    v.add(qpath, nullptr,
+    v.add("wrong_type", qpath, nullptr,
           "must be a list of " + std::to_string(n_percentiles) + " numbers, one per entry of percentiles (it has " +
               (q->is_array() ? std::to_string(q->size()) : std::string("no list")) + ")");
     return std::nullopt;
@@ -159,13 +159,13 @@ std::optional<SexDistribution> read_distribution(Validator& v, const Json& j, co
     const Json& e = (*q)[i];
     const std::string epath = qpath + "[" + std::to_string(i) + "]";
     if (!e.is_number() || !std::isfinite(e.get<double>())) {
-      v.add(epath, &e, "must be a number");
+      v.add("wrong_type", epath, &e, "must be a number");
       good = false;
       continue;
     }
     const double x = e.get<double>();
     if (!d.quantiles.empty() && x < d.quantiles.back()) {
-      v.add(epath, &e,
+      v.add("out_of_range", epath, &e,
             "must not be below the value before it (" + Json(d.quantiles.back()).dump() +
                 "): a quantile function never decreases");
       good = false;
@@ -180,10 +180,10 @@ std::optional<Dimension> read_dimension(Validator& v, const std::string& key, co
                                         std::size_t n_percentiles, std::optional<int> female, std::optional<int> male) {
   static const std::regex key_pattern("[a-z][a-z0-9_]{0,63}");
   if (!std::regex_match(key, key_pattern)) {
-    v.add(path, nullptr, "name must be lowercase letters, digits and _ (starting with a letter)");
+    v.add("invalid_value", path, nullptr, "name must be lowercase letters, digits and _ (starting with a letter)");
   }
   if (!j.is_object()) {
-    v.add(path, &j, "must be an object");
+    v.add("wrong_type", path, &j, "must be an object");
     return std::nullopt;
   }
   v.check_keys(j, path,
@@ -199,12 +199,12 @@ std::optional<Dimension> read_dimension(Validator& v, const std::string& key, co
     if (auto u = find_table_unit(*unit)) {
       d.unit = *u;
       if (is_known_mass_dimension(key) != is_mass_unit(*u)) {
-        v.add(path + ".unit", &j["unit"],
+        v.add("invalid_value", path + ".unit", &j["unit"],
               is_known_mass_dimension(key) ? "must be a mass unit (kg or lb) for " + key
                                            : "must be a length unit (mm, cm or in) for " + key);
       }
     } else {
-      v.add(path + ".unit", &j["unit"], "must be one of mm, cm, in, kg, lb");
+      v.add("invalid_value", path + ".unit", &j["unit"], "must be one of mm, cm, in, kg, lb");
     }
   }
   if (auto kind = v.string_at(j, path, "kind", true)) {
@@ -213,10 +213,10 @@ std::optional<Dimension> read_dimension(Validator& v, const std::string& key, co
     } else if (*kind == "derived") {
       d.kind = DimensionKind::derived;
       if (d.derivation.empty() && !j.contains("derivation")) {
-        v.add(path + ".derivation", nullptr, "is required for a derived dimension (the per-subject formula)");
+        v.add("missing_key", path + ".derivation", nullptr, "is required for a derived dimension (the per-subject formula)");
       }
     } else {
-      v.add(path + ".kind", &j["kind"], "must be \"measured\" or \"derived\"");
+      v.add("invalid_value", path + ".kind", &j["kind"], "must be \"measured\" or \"derived\"");
     }
   }
   for (Sex s : {Sex::female, Sex::male}) {
@@ -224,11 +224,11 @@ std::optional<Dimension> read_dimension(Validator& v, const std::string& key, co
     const std::optional<int>& subjects = s == Sex::female ? female : male;
     auto it = j.find(name);
     if (it == j.end()) {
-      if (subjects) v.add(path + "." + name, nullptr, "is required: subjects lists " + name + " subjects");
+      if (subjects) v.add("missing_key", path + "." + name, nullptr, "is required: subjects lists " + name + " subjects");
       continue;
     }
     if (!subjects) {
-      v.add(path + "." + name, nullptr, "is not allowed: subjects lists no " + name + " subjects");
+      v.add("invalid_value", path + "." + name, nullptr, "is not allowed: subjects lists no " + name + " subjects");
       continue;
     }
     auto dist = read_distribution(v, *it, path + "." + name, n_percentiles, *subjects);
@@ -239,7 +239,7 @@ std::optional<Dimension> read_dimension(Validator& v, const std::string& key, co
 
 std::optional<SourceFile> read_source_file(Validator& v, const Json& j, const std::string& path) {
   if (!j.is_object()) {
-    v.add(path, &j, "must be an object with name, sex, bytes and sha256");
+    v.add("wrong_type", path, &j, "must be an object with name, sex, bytes and sha256");
     return std::nullopt;
   }
   v.check_keys(j, path, {"name", "sex", "bytes", "sha256"});
@@ -247,20 +247,20 @@ std::optional<SourceFile> read_source_file(Validator& v, const Json& j, const st
   f.name = v.string_at(j, path, "name", true).value_or("");
   f.sex = v.string_at(j, path, "sex", true).value_or("");
   if (!f.sex.empty() && f.sex != "female" && f.sex != "male") {
-    v.add(path + ".sex", &j["sex"], "must be \"female\" or \"male\"");
+    v.add("invalid_value", path + ".sex", &j["sex"], "must be \"female\" or \"male\"");
   }
   if (auto b = v.positive_int_at(j, path, "bytes")) f.bytes = *b;
   f.sha256 = v.string_at(j, path, "sha256", true).value_or("");
   static const std::regex hex64("[0-9a-f]{64}");
   if (!f.sha256.empty() && !std::regex_match(f.sha256, hex64)) {
-    v.add(path + ".sha256", &j["sha256"], "must be 64 lowercase hexadecimal digits");
+    v.add("invalid_value", path + ".sha256", &j["sha256"], "must be 64 lowercase hexadecimal digits");
   }
   return f;
 }
 
 void read_table(Validator& v, const Json& root, PopulationTable& t) {
   if (!root.is_object()) {
-    v.add("", &root, "must hold one JSON object");
+    v.add("wrong_type", "", &root, "must hold one JSON object");
     return;
   }
   v.check_keys(root, "",
@@ -268,13 +268,13 @@ void read_table(Validator& v, const Json& root, PopulationTable& t) {
                 "generated_by", "method", "caveats", "percentiles", "dimensions"});
   if (const Json* ver = v.require(root, "", "rackreach_population")) {
     if (!ver->is_number_integer() || ver->get<long long>() != population_format_version) {
-      v.add("rackreach_population", ver, "must be 1 (the format version this program reads)");
+      v.add("invalid_value", "rackreach_population", ver, "must be 1 (the format version this program reads)");
     }
   }
   if (auto name = v.string_at(root, "", "name", true)) {
     static const std::regex name_pattern("[a-z0-9][a-z0-9_.-]{0,39}");
     if (!std::regex_match(*name, name_pattern)) {
-      v.add("name", &root["name"], "must be 1 to 40 lowercase letters, digits, '_', '.' or '-'");
+      v.add("invalid_value", "name", &root["name"], "must be 1 to 40 lowercase letters, digits, '_', '.' or '-'");
     }
     t.name = *name;
   }
@@ -287,7 +287,7 @@ void read_table(Validator& v, const Json& root, PopulationTable& t) {
 
   if (const Json* subjects = v.require(root, "", "subjects")) {
     if (!subjects->is_object() || subjects->empty()) {
-      v.add("subjects", subjects, "must be an object giving the number of female and/or male subjects");
+      v.add("wrong_type", "subjects", subjects, "must be an object giving the number of female and/or male subjects");
     } else {
       v.check_keys(*subjects, "subjects", {"female", "male"});
       if (subjects->contains("female")) t.subjects_female = v.positive_int_at(*subjects, "subjects", "female");
@@ -296,7 +296,7 @@ void read_table(Validator& v, const Json& root, PopulationTable& t) {
   }
   if (auto it = root.find("source_files"); it != root.end()) {
     if (!it->is_array()) {
-      v.add("source_files", &*it, "must be a list of objects");
+      v.add("wrong_type", "source_files", &*it, "must be a list of objects");
     } else {
       for (std::size_t i = 0; i < it->size(); ++i) {
         if (auto f = read_source_file(v, (*it)[i], "source_files[" + std::to_string(i) + "]")) {
@@ -310,19 +310,19 @@ void read_table(Validator& v, const Json& root, PopulationTable& t) {
   if (const Json* ps = v.require(root, "", "percentiles")) {
     percentiles_ok = true;
     if (!ps->is_array() || ps->size() < 2) {
-      v.add("percentiles", ps, "must be a list of at least 2 percentiles (0 to 100)");
+      v.add("wrong_type", "percentiles", ps, "must be a list of at least 2 percentiles (0 to 100)");
       percentiles_ok = false;
     } else {
       for (std::size_t i = 0; i < ps->size(); ++i) {
         const Json& e = (*ps)[i];
         const std::string path = "percentiles[" + std::to_string(i) + "]";
         if (!e.is_number() || !(e.get<double>() >= 0.0 && e.get<double>() <= 100.0)) {
-          v.add(path, &e, "must be a number from 0 to 100");
+          v.add("out_of_range", path, &e, "must be a number from 0 to 100");
           percentiles_ok = false;
           continue;
         }
         if (!t.percentiles.empty() && e.get<double>() <= t.percentiles.back()) {
-          v.add(path, &e, "must be greater than the percentile before it (" + Json(t.percentiles.back()).dump() + ")");
+          v.add("out_of_range", path, &e, "must be greater than the percentile before it (" + Json(t.percentiles.back()).dump() + ")");
           percentiles_ok = false;
         }
         t.percentiles.push_back(e.get<double>());
@@ -333,7 +333,7 @@ void read_table(Validator& v, const Json& root, PopulationTable& t) {
   const Json* dims = v.require(root, "", "dimensions");
   if (!dims) return;
   if (!dims->is_object() || dims->empty()) {
-    v.add("dimensions", dims, "must be an object with at least one dimension");
+    v.add("wrong_type", "dimensions", dims, "must be an object with at least one dimension");
     return;
   }
   if (!percentiles_ok) return;  // the quantile lists cannot be checked against a broken percentile list
@@ -384,7 +384,7 @@ LoadedPopulation load_population_text(const std::string& text, const std::string
   try {
     root = Json::parse(text);
   } catch (const Json::parse_error& e) {
-    out.problems.push_back({file_label, "", "", std::string("must be valid JSON: ") + e.what()});
+    out.problems.push_back({"parse_error", "", "", std::string("must be valid JSON: ") + e.what(), "", file_label});
     return out;
   }
   Validator v(file_label);
@@ -399,7 +399,7 @@ LoadedPopulation load_population_file(const std::filesystem::path& path) {
   std::ifstream in(path, std::ios::binary);
   if (!in) {
     LoadedPopulation out;
-    out.problems.push_back({path.string(), "", "", "cannot be opened for reading"});
+    out.problems.push_back({"file_error", "", "", "cannot be opened for reading", "", path.string()});
     return out;
   }
   std::ostringstream text;

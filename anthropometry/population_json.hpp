@@ -10,7 +10,7 @@
 #include <vector>
 
 #include "anthropometry/population_table.hpp"
-#include "anthropometry/problem.hpp"
+#include "engine/problem.hpp"
 
 namespace rackreach {
 
@@ -18,7 +18,7 @@ inline constexpr int population_format_version = 1;
 
 struct LoadedPopulation {
   std::optional<PopulationTable> table;  ///< set only when there are no problems
-  std::vector<InputProblem> problems;
+  std::vector<Problem> problems;
 };
 
 /// Parses and validates `text`; `file_label` names the file in problems.

@@ -152,7 +152,7 @@ int run(const std::string& survey_name, const std::string& raw_dir, const std::s
     if (!out) throw std::runtime_error(out_path + ": cannot be written");
   }
   const LoadedPopulation back = load_population_file(out_path);
-  for (const InputProblem& p : back.problems) std::cerr << format_problem(p) << "\n";
+  for (const Problem& p : back.problems) std::cerr << format_problem(p) << "\n";
   if (!back.table) return 1;
 
   // How far linear interpolation between tabulated percentiles strays from the exact type-7 value, checked

@@ -6,7 +6,7 @@
 #include <string>
 #include <vector>
 
-#include "engine/io/problem.hpp"
+#include "engine/problem.hpp"
 
 namespace rackreach::cli {
 

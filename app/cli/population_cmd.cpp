@@ -27,8 +27,8 @@ std::string pad(const std::string& s, std::size_t width, bool right) {
   return right ? fill + s : s + fill;
 }
 
-void print_input_problems(const std::vector<InputProblem>& problems) {
-  for (const InputProblem& p : problems) std::cerr << format_problem(p) << "\n";
+void print_input_problems(const std::vector<Problem>& problems) {
+  for (const Problem& p : problems) std::cerr << format_problem(p) << "\n";
 }
 
 int run_list() {

@@ -64,16 +64,6 @@ std::string json_excerpt(const nlohmann::json& j) {
   return s;
 }
 
-std::string format_problem(const std::string& file, const Problem& p) {
-  std::string s = file;
-  if (!p.path.empty()) s += ": " + p.path;
-  if (!p.context.empty()) s += " (" + p.context + ")";
-  s += ": " + p.rule;
-  if (!p.value.empty()) s += "; it is " + p.value;
-  s += " [" + p.code + "]";
-  return s;
-}
-
 void JsonReader::add(std::string code, const JsonPath& path, const nlohmann::json* value, std::string rule) {
   problems_.push_back({std::move(code), path.str(), value ? json_excerpt(*value) : std::string(), std::move(rule),
                        context_});

@@ -12,7 +12,7 @@
 #include <vector>
 
 #include "engine/io/json_path.hpp"
-#include "engine/io/problem.hpp"
+#include "engine/problem.hpp"
 
 namespace rackreach {
 

@@ -8,7 +8,7 @@
 #include <string_view>
 #include <vector>
 
-#include "engine/io/problem.hpp"
+#include "engine/problem.hpp"
 #include "engine/project.hpp"
 
 namespace rackreach {

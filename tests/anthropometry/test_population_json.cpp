@@ -16,7 +16,7 @@ std::string fixture(const std::string& name) {
   return std::string(RACKREACH_SOURCE_DIR) + "/tests/anthropometry/data/" + name;
 }
 
-std::vector<rackreach::InputProblem> problems_of(const std::string& name) {
+std::vector<rackreach::Problem> problems_of(const std::string& name) {
   const rackreach::LoadedPopulation loaded = rackreach::load_population_file(fixture(name));
   CHECK_FALSE(loaded.table);
   for (const auto& p : loaded.problems) {
@@ -27,7 +27,7 @@ std::vector<rackreach::InputProblem> problems_of(const std::string& name) {
   return loaded.problems;
 }
 
-bool has_problem(const std::vector<rackreach::InputProblem>& ps, const std::string& path, const std::string& value,
+bool has_problem(const std::vector<rackreach::Problem>& ps, const std::string& path, const std::string& value,
                  const std::string& rule_part) {
   for (const auto& p : ps) {
     if (p.path == path && p.value == value && p.rule.find(rule_part) != std::string::npos) return true;
