@@ -14,10 +14,19 @@
 
 namespace rackreach {
 
+/// The two workers of the reach checks and the model's parameters; made by the caller from a workforce table.
+struct ReachSetup {
+  ReachBody small;
+  ReachBody large;
+  ReachParameters parameters;
+  std::string workforce;  ///< e.g. "ansur2, 50% women"
+};
+
 struct AssessOptions {
   RoundingMode rounding = RoundingMode::full;
   std::optional<DurationRule> duration_rule;  ///< overrides the project's rule when set
   RiskBands bands;
+  std::optional<ReachSetup> reach;  ///< needed for tasks with shelf geometry
 };
 
 struct JobAssessment {
@@ -25,6 +34,7 @@ struct JobAssessment {
   bool duration_declared = false;  ///< category given in the file (true) or derived from the pattern
   DurationAssessment duration;
   std::vector<TaskResult> tasks;
+  std::vector<std::optional<ReachResult>> reach;  ///< parallel to `tasks`: for tasks with shelf geometry
   std::optional<CompositeResult> composite;  ///< for jobs of two or more tasks
   std::vector<Warning> warnings;             ///< job-level: duration, composite flags
 
@@ -37,10 +47,12 @@ struct ProjectAssessment {
   RoundingMode rounding = RoundingMode::full;
   DurationRule duration_rule = DurationRule::edition_2021;
   RiskBands bands;
+  std::optional<ReachSetup> reach;
   std::vector<JobAssessment> jobs;
 };
 
-JobAssessment assess_job(const LiftJob& job, UnitSystem units, DurationRule rule, RoundingMode mode);
+JobAssessment assess_job(const LiftJob& job, UnitSystem units, DurationRule rule, RoundingMode mode,
+                         const ReachSetup* reach = nullptr);
 ProjectAssessment assess_project(const Project& project, const AssessOptions& options);
 
 }  // namespace rackreach

@@ -10,6 +10,7 @@
 #include "engine/lifting/duration.hpp"
 #include "engine/lifting/rnle_1994.hpp"
 #include "engine/quantities.hpp"
+#include "engine/reach/sagittal_reach.hpp"
 
 namespace rackreach {
 
@@ -20,6 +21,28 @@ struct FrequencySample {
   double sample_min = frequency_sample_min;
 };
 
+/// Where the origin of a task sits on a shelf, for the reach check (lengths in the project's units). The grip
+/// height is the origin's V.
+struct ShelfGeometry {
+  double grip_depth = 0.0;                    ///< behind the rack face
+  std::optional<double> beam_underside;       ///< floor to the underside of the beam or shelf above the grip
+  std::optional<double> overhead_structure;   ///< floor to the lowest structure over where the picker stands
+};
+
+/// What a task carries beside the lift itself.
+struct TaskDetails {
+  std::optional<FrequencySample> frequency_sample;
+  std::optional<ShelfGeometry> shelf;
+};
+
+/// The workforce the reach checks are made for: a population table mixed by sex.
+struct WorkforceSpec {
+  std::string population = "ansur2";   ///< a shipped table name or a file path
+  double women_share = 0.5;            ///< 0..1; default 50/50 (our assumption where the make-up is not given)
+  double small_percentile = 5.0;       ///< reach is checked for this worker
+  double large_percentile = 95.0;      ///< clearance is checked for this one
+};
+
 /// A job: tasks done by one worker over one duration. The duration is declared as a category or derived
 /// from a pattern of lifting and recovery periods.
 struct LiftJob {
@@ -28,7 +51,7 @@ struct LiftJob {
   std::optional<DurationCategory> declared_duration;
   std::vector<WorkPeriod> work_pattern;  ///< used when no category is declared
   std::vector<LiftTask> tasks;
-  std::vector<std::optional<FrequencySample>> frequency_samples;  ///< one per task, parallel to `tasks`
+  std::vector<TaskDetails> details;  ///< one per task, parallel to `tasks`
 };
 
 struct ProjectInfo {
@@ -43,7 +66,18 @@ struct Project {
   UnitSystem units = UnitSystem::metric;
   ProjectInfo info;
   DurationRule duration_rule = DurationRule::edition_2021;
+  WorkforceSpec workforce;
+  bool workforce_given = false;          ///< false: the defaults above are used (and shown)
+  ReachParameters reach_parameters;      ///< in cm; defaults unless the file overrides them
+  std::vector<std::string> reach_parameters_set;  ///< names of the parameters the file overrides
   std::vector<LiftJob> jobs;
+
+  bool has_shelf_geometry() const {
+    for (const LiftJob& j : jobs)
+      for (const TaskDetails& d : j.details)
+        if (d.shelf) return true;
+    return false;
+  }
 };
 
 }  // namespace rackreach

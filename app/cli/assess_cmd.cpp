@@ -3,6 +3,8 @@
 
 #include <iostream>
 
+#include "anthropometry/data_dir.hpp"
+#include "anthropometry/reach_setup.hpp"
 #include "app/cli/commands.hpp"
 #include "engine/assess.hpp"
 #include "engine/io/assessment_output.hpp"
@@ -67,6 +69,15 @@ void add_assess_command(CLI::App& app, int& exit_code) {
       return;
     }
     AssessOptions options;
+    if (r.project->has_shelf_geometry()) {
+      LoadedReachSetup reach = load_reach_setup(*r.project, find_data_dir());
+      if (!reach.setup) {
+        print_problems(args->file, reach.problems);
+        exit_code = exit_invalid_input;
+        return;
+      }
+      options.reach = std::move(reach.setup);
+    }
     options.rounding = args->rounding == "worksheet" ? RoundingMode::worksheet : RoundingMode::full;
     if (!args->duration_rule.empty()) options.duration_rule = find_duration_rule(args->duration_rule);
     const ProjectAssessment a = assess_project(*r.project, options);

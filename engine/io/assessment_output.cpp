@@ -39,6 +39,50 @@ void write_lift_point(JsonWriter& w, const LiftPoint& p) {
   w.begin_object().field("h", p.h).field("v", p.v).field("a", p.a_deg).end_object();
 }
 
+void write_reach(JsonWriter& w, const ReachResult& r) {
+  w.begin_object();
+  w.field("small_height_zone", height_zone_name(r.small_height_zone));
+  w.field("large_height_zone", height_zone_name(r.large_height_zone));
+  w.field("depth_zone", depth_zone_name(r.depth_zone));
+  w.field("small_shoulder_to_grip_cm", r.small_shoulder_to_grip_cm);
+  w.field("small_max_reach_margin_cm", r.small_max_reach_margin_cm);
+  w.field("small_comfortable_reach_margin_cm", r.small_comfortable_reach_margin_cm);
+  w.field("h_cm", r.h_cm).field("v_cm", r.v_cm);
+  w.key("checks").begin_array();
+  for (const ReachCheck& c : r.checks) {
+    w.begin_object().field("code", c.code);
+    if (c.worker) w.field("worker", reach_worker_name(*c.worker));
+    else w.key("worker").null();
+    w.field("dimension", c.dimension).field("available_cm", c.available_cm).field("needed_cm", c.needed_cm);
+    w.field("margin_cm", c.margin_cm).field("passed", c.passed).field("advisory", c.advisory);
+    w.key("parameters").begin_array();
+    for (const std::string& p : c.parameters) w.value(p);
+    w.end_array();
+    w.field("message", c.message).end_object();
+  }
+  w.end_array();
+  w.end_object();
+}
+
+void write_reach_model(JsonWriter& w, const Project& project, const ReachSetup& setup) {
+  const ReachParameters& p = setup.parameters;
+  w.begin_object();
+  w.field("workforce", setup.workforce);
+  w.field("small_worker", setup.small.label).field("large_worker", setup.large.label);
+  w.key("parameters_cm").begin_object();
+  w.field("ankle_to_rack_face", p.ankle_to_rack_face_cm).field("footwear_allowance", p.footwear_allowance_cm);
+  w.field("shoulder_ahead_of_ankles", p.shoulder_ahead_of_ankles_cm);
+  w.field("shoulder_pivot_below_acromion", p.shoulder_pivot_below_acromion_cm);
+  w.field("hand_clearance_allowance", p.hand_clearance_allowance_cm);
+  w.end_object();
+  w.field("comfortable_reach_fraction", p.comfortable_reach_fraction);
+  w.field("hand_above_grip_fraction_of_breadth", p.hand_above_grip_fraction_of_breadth);
+  w.key("set_in_file").begin_array();
+  for (const std::string& name : project.reach_parameters_set) w.value(name);
+  w.end_array();
+  w.end_object();
+}
+
 void write_job(JsonWriter& w, const LiftJob& job, const JobAssessment& ja, const RiskBands& bands, UnitSystem u) {
   w.begin_object();
   w.field("id", ja.id);
@@ -64,7 +108,7 @@ void write_job(JsonWriter& w, const LiftJob& job, const JobAssessment& ja, const
     w.key("destination");
     write_lift_point(w, t.destination);
     w.end_object();
-    if (const auto& s = job.frequency_samples[i]) {
+    if (const auto& s = job.details[i].frequency_sample) {
       w.key("frequency_sample").begin_object();
       w.field("lifts_per_min", s->lifts_per_min).field("lifting_min", s->lifting_min).field("sample_min", s->sample_min);
       w.end_object();
@@ -75,6 +119,10 @@ void write_job(JsonWriter& w, const LiftJob& job, const JobAssessment& ja, const
     write_point(w, r.destination);
     w.field("governing", lift_end_name(r.governing)).field("li", r.li).field("band", band_name(find_band(r.li, bands)));
     w.field("outside_equation", r.outside_equation).field("within_limits_of_application", r.within_limits_of_application);
+    if (ja.reach[i]) {
+      w.key("reach");
+      write_reach(w, *ja.reach[i]);
+    }
     w.key("warnings");
     write_warnings(w, r.warnings, u);
     w.end_object();
@@ -132,6 +180,11 @@ std::string write_assessment_json(const Project& project, const ProjectAssessmen
   w.line_break("\n ");
   w.field("caution", caution_text);
   w.line_break("\n ");
+  if (a.reach) {
+    w.key("reach_model");
+    write_reach_model(w, project, *a.reach);
+    w.line_break("\n ");
+  }
   w.key("jobs").begin_array();
   for (std::size_t i = 0; i < a.jobs.size(); ++i) {
     w.line_break("\n  ");
@@ -171,6 +224,15 @@ std::string write_assessment_table(const Project& project, const ProjectAssessme
   s += "Units: " + std::string(unit_system_name(u)) + " (lengths " + len + ", loads and limits " + mass +
        ", angles deg, frequency lifts/min)   Rounding: " + (ws ? "worksheet (multipliers 2 dp, weights and indices 1 dp)" : "full precision") +
        "   Duration rule: " + std::string(duration_rule_name(a.duration_rule)) + " edition\n";
+  if (a.reach) {
+    const ReachParameters& p = a.reach->parameters;
+    s += "Reach: workforce " + a.reach->workforce + "; reach for the " + a.reach->small.label + ", clearance for the " +
+         a.reach->large.label + "; standing " + fixed(p.ankle_to_rack_face_cm, 1) +
+         " cm from the rack face (ankles), footwear " + fixed(p.footwear_allowance_cm, 1) + " cm, comfortable reach " +
+         fixed(p.comfortable_reach_fraction * 100.0, 0) + "% of maximum" +
+         (project.reach_parameters_set.empty() ? std::string(" (defaults)") : std::string(" (some set in the file)")) +
+         "\n";
+  }
   s += "Bands: LI <= " + fixed(a.bands.elevated_above, 1) + " within limit; <= " + fixed(a.bands.high_above, 1) +
        " elevated; <= " + fixed(a.bands.very_high_above, 1) + " high; above: very high\n";
 
@@ -220,6 +282,17 @@ std::string write_assessment_table(const Project& project, const ProjectAssessme
            "; FIRWL " + fixed(r.governing_point().firwl, rd) + " " + mass + ", FILI " +
            (r.governing_point().fili ? fixed(*r.governing_point().fili, rd) : std::string("-")) + ")" +
            (r.within_limits_of_application ? "" : "; outside the limits of application, see warnings") + "\n";
+    for (std::size_t ti = 0; ti < ja.tasks.size(); ++ti) {
+      if (!ja.reach[ti]) continue;
+      const ReachResult& rr = *ja.reach[ti];
+      s += "  Reach, task " + ja.tasks[ti].id + ": grip " + fixed(rr.v_cm, 1) + " cm high, " +
+           fixed(job.details[ti].shelf ? Length{job.details[ti].shelf->grip_depth, u}.in_cm() : 0.0, 1) +
+           " cm deep (implied H " + fixed(rr.h_cm, 1) + " cm); small worker: " +
+           std::string(height_zone_name(rr.small_height_zone)) + ", " + std::string(depth_zone_name(rr.depth_zone)) +
+           ", reach margin " + fixed(rr.small_max_reach_margin_cm, 1) + " cm; large worker: " +
+           std::string(height_zone_name(rr.large_height_zone)) + "\n";
+      if (const ReachCheck* worst = rr.find_worst_failure()) s += "    NOT MET: " + worst->message + "\n";
+    }
     if (ja.composite) {
       const CompositeResult& c = *ja.composite;
       s += "  Composite Lifting Index: " +

@@ -81,7 +81,9 @@ bool JsonReader::object(const nlohmann::json& j, const JsonPath& path, std::init
       std::string list, suggestion;
       for (std::string_view a : allowed) {
         list += (list.empty() ? "" : ", ") + std::string(a);
-        if (suggestion.empty() && edit_distance(a, it.key()) <= 2) suggestion = std::string(a);
+        const bool prefix = it.key().rfind(a, 0) == 0 || std::string_view(a).rfind(it.key(), 0) == 0;
+        if (suggestion.empty() && (edit_distance(a, it.key()) <= 2 || (prefix && it.key().size() > 3)))
+          suggestion = std::string(a);
       }
       std::string rule = "unknown key";
       if (!suggestion.empty()) rule += " (did you mean \"" + suggestion + "\"?)";

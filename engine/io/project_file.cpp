@@ -96,7 +96,8 @@ class ProjectLoader {
   std::optional<Project> finish(const json& doc, bool jobs_streamed) {
     const JsonPath root;
     if (!r_.object(doc, root,
-                   {"rackreach", "units", "title", "site", "assessor", "date", "duration_rule", "jobs"}))
+                   {"rackreach", "units", "title", "site", "assessor", "date", "duration_rule", "workforce",
+                    "reach_parameters", "jobs"}))
       return std::nullopt;
     Project p;
     if (const json* v = r_.member(doc, root, "rackreach", true)) {
@@ -113,6 +114,9 @@ class ProjectLoader {
     p.info.date = read_date(doc, root);
     if (auto rule = r_.choice(doc, root, "duration_rule", false, {"2021", "1994"}))
       p.duration_rule = *find_duration_rule(*rule);
+    if (const json* w = r_.member(doc, root, "workforce", false)) load_workforce_spec(*w, JsonPath(root, "workforce"), p);
+    if (const json* rp = r_.member(doc, root, "reach_parameters", false))
+      load_reach_parameters(*rp, JsonPath(root, "reach_parameters"), p);
 
     if (const json* jobs = r_.member(doc, root, "jobs", true)) {
       const JsonPath jobs_path(root, "jobs");
@@ -172,7 +176,7 @@ class ProjectLoader {
       if (r_.array(*tasks, tasks_path, 1, "tasks")) {
         std::set<std::string> ids;
         job.tasks.reserve(tasks->size());
-        job.frequency_samples.reserve(tasks->size());
+        job.details.reserve(tasks->size());
         const std::string job_context = r_.context();
         for (std::size_t i = 0; i < tasks->size(); ++i) {
           const JsonPath task_path(tasks_path, i);
@@ -240,7 +244,7 @@ class ProjectLoader {
     const std::string job_context = r_.context();
     if (!r_.object(j, path,
                    {"id", "load", "max_load", "frequency", "frequency_sample", "coupling", "origin", "destination",
-                    "control_at_destination", "limits"}))
+                    "control_at_destination", "limits", "shelf"}))
       return;
     const std::size_t before = problems_.size();
     LiftTask t;
@@ -270,10 +274,64 @@ class ProjectLoader {
     if (auto d = load_point(j, path, "destination")) t.destination = *d;
     t.control_at_destination = r_.boolean(j, path, "control_at_destination", false).value_or(false);
     if (const json* l = r_.member(j, path, "limits", false)) load_limits(*l, JsonPath(path, "limits"), t.limits);
+    std::optional<ShelfGeometry> shelf;
+    if (const json* sh = r_.member(j, path, "shelf", false)) shelf = load_shelf(*sh, JsonPath(path, "shelf"), t.origin.v);
     r_.set_context(job_context);
     if (problems_.size() != before) return;
     job.tasks.push_back(std::move(t));
-    job.frequency_samples.push_back(sample);
+    job.details.push_back({sample, shelf});
+  }
+
+  std::optional<ShelfGeometry> load_shelf(const json& j, const JsonPath& path, double grip_height) {
+    if (!r_.object(j, path, {"grip_depth", "beam_underside", "overhead_structure"})) return std::nullopt;
+    const std::string_view len = length_unit(units_);
+    ShelfGeometry g;
+    auto depth = r_.number(j, path, "grip_depth", true, {0.0, std::nullopt, false, false, len});
+    // The beam above the grip must be above the grip itself (the origin's V).
+    g.beam_underside = r_.number(j, path, "beam_underside", false, {grip_height, std::nullopt, true, false, len});
+    g.overhead_structure = r_.number(j, path, "overhead_structure", false, {0.0, std::nullopt, true, false, len});
+    if (!depth || (j.contains("beam_underside") && !g.beam_underside) ||
+        (j.contains("overhead_structure") && !g.overhead_structure))
+      return std::nullopt;
+    g.grip_depth = *depth;
+    return g;
+  }
+
+  void load_workforce_spec(const json& j, const JsonPath& path, Project& p) {
+    if (!r_.object(j, path, {"population", "women", "small_percentile", "large_percentile"})) return;
+    p.workforce_given = true;
+    if (auto name = r_.string(j, path, "population", false)) p.workforce.population = *name;
+    if (auto w = r_.number(j, path, "women", false, {0.0, 1.0, false, false, "(share of the workforce)"}))
+      p.workforce.women_share = *w;
+    if (auto s = r_.number(j, path, "small_percentile", false, {0.0, 50.0, true, false, "(percentile)"}))
+      p.workforce.small_percentile = *s;
+    if (auto l = r_.number(j, path, "large_percentile", false, {50.0, 100.0, false, true, "(percentile)"}))
+      p.workforce.large_percentile = *l;
+  }
+
+  /// The reach model's parameters that a project may set; lengths in the project's units, stored in cm.
+  void load_reach_parameters(const json& j, const JsonPath& path, Project& p) {
+    if (!r_.object(j, path,
+                   {"ankle_to_rack_face", "footwear_allowance", "shoulder_ahead_of_ankles", "comfortable_reach_fraction",
+                    "hand_clearance_allowance"}))
+      return;
+    const std::string_view len = length_unit(units_);
+    ReachParameters& rp = p.reach_parameters;
+    auto length = [&](const char* key, double& target_cm, double max_cm) {
+      const double max = Length{max_cm, UnitSystem::metric}.in_units(units_);
+      if (auto v = r_.number(j, path, key, false, {0.0, max, false, false, len})) {
+        target_cm = Length{*v, units_}.in_cm();
+        p.reach_parameters_set.emplace_back(key);
+      }
+    };
+    length("ankle_to_rack_face", rp.ankle_to_rack_face_cm, 100.0);
+    length("footwear_allowance", rp.footwear_allowance_cm, 10.0);
+    length("shoulder_ahead_of_ankles", rp.shoulder_ahead_of_ankles_cm, 40.0);
+    length("hand_clearance_allowance", rp.hand_clearance_allowance_cm, 20.0);
+    if (auto f = r_.number(j, path, "comfortable_reach_fraction", false, {0.0, 1.0, true, false, "(fraction)"})) {
+      rp.comfortable_reach_fraction = *f;
+      p.reach_parameters_set.emplace_back("comfortable_reach_fraction");
+    }
   }
 
   std::optional<FrequencySample> load_frequency_sample(const json& j, const JsonPath& path) {

@@ -36,6 +36,9 @@ std::string_view warning_code(const Warning& w) {
     case WarningKind::fili_above_1: return "flag.fili_above_1";
     case WarningKind::stli_above_1: return "flag.stli_above_1";
     case WarningKind::cli_undefined: return "outside.cli";
+    case WarningKind::reach_limit: return "reach.limit";
+    case WarningKind::reach_h_differs: return "reach.h_differs";
+    case WarningKind::reach_input: return "reach.input";
   }
   return "?";
 }
@@ -73,6 +76,11 @@ std::string describe_warning(const Warning& w, UnitSystem units) {
       return "FILI above 1.0: the maximum load may be too much for some workers even at a low frequency";
     case WarningKind::stli_above_1: return "STLI above 1.0: the task alone exceeds the limit";
     case WarningKind::cli_undefined: return "CLI undefined";
+    case WarningKind::reach_limit: return "a reach limit is not met";
+    case WarningKind::reach_h_differs:
+      return fmt("the task's H (%g) differs from the H the standing distance and grip depth give (%g)", w.value,
+                 w.limit);
+    case WarningKind::reach_input: return "a reach input is not valid";
   }
   return "?";
 }

@@ -22,6 +22,8 @@ enum class WarningKind : std::uint8_t {
   carry_push_share, floor_friction, temperature, humidity, duration_over_8h,
   // Flags of the composite procedure (Applications Manual 2.4) and job-level notes.
   fili_above_1, stli_above_1, cli_undefined,
+  // Reach checks of a task with shelf geometry (note: the check's own sentence).
+  reach_limit, reach_h_differs, reach_input,
 };
 
 struct Warning {

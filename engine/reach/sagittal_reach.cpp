@@ -156,15 +156,21 @@ ReachResult calc_reach(const ReachBody& small, const ReachBody& large, const Rea
   r.h_cm = p.ankle_to_rack_face_cm + q.grip_depth_cm;
   r.v_cm = q.grip_height_cm;
 
-  // Small worker: the grip-reach sphere around the shoulder, and the overhead grip reach above it.
-  const double distance = (grip - calc_shoulder_pivot(small, p)).norm();
+  // Small worker: the grip-reach sphere around the shoulder, and the overhead grip reach above it. Below the
+  // shoulder the picker bends the knees and trunk to bring the shoulder down to the grip, so there only the
+  // horizontal distance counts (a low pick is judged by the lifting equation's V and H, not by standing reach).
+  const Eigen::Vector2d shoulder = calc_shoulder_pivot(small, p);
+  const bool below_shoulder = q.grip_height_cm < shoulder.y();
+  const double distance = below_shoulder ? grip.x() - shoulder.x() : (grip - shoulder).norm();
   r.small_shoulder_to_grip_cm = distance;
   const std::vector<std::string> sphere_params = {"ankle_to_rack_face_cm", "shoulder_ahead_of_ankles_cm",
                                                   "footwear_allowance_cm", "shoulder_pivot_below_acromion_cm"};
   ReachCheck max_reach = make_check("max_reach", ReachWorker::small, "shoulder_grip_length",
                                     small.shoulder_grip_length_cm, distance, sphere_params);
-  max_reach.message = who(small, ReachWorker::small) + ": the grip is " + cm(distance) +
-                      " from the shoulder, the straight-arm grip reach is " + cm(small.shoulder_grip_length_cm) + ": " +
+  const std::string from_shoulder =
+      below_shoulder ? " in front of the shoulder (below shoulder height the picker bends down to it)" : " from the shoulder";
+  max_reach.message = who(small, ReachWorker::small) + ": the grip is " + cm(distance) + from_shoulder +
+                      ", the straight-arm grip reach is " + cm(small.shoulder_grip_length_cm) + ": " +
                       verdict(max_reach);
   std::vector<std::string> comfort_params = sphere_params;
   comfort_params.push_back("comfortable_reach_fraction");
@@ -172,8 +178,8 @@ ReachResult calc_reach(const ReachBody& small, const ReachBody& large, const Rea
   ReachCheck comfort = make_check("comfortable_reach", ReachWorker::small, "shoulder_grip_length", comfortable,
                                   distance, comfort_params);
   comfort.advisory = true;
-  comfort.message = who(small, ReachWorker::small) + ": the grip is " + cm(distance) +
-                    " from the shoulder, comfortable reach is " + cm(comfortable) + ": " + verdict(comfort);
+  comfort.message = who(small, ReachWorker::small) + ": the grip is " + cm(distance) + from_shoulder +
+                    ", comfortable reach is " + cm(comfortable) + ": " + verdict(comfort);
   ReachCheck overhead =
       make_check("overhead_reach", ReachWorker::small, "overhead_grip_reach",
                  small.overhead_grip_reach_cm + p.footwear_allowance_cm, q.grip_height_cm, {"footwear_allowance_cm"});

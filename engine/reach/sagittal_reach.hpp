@@ -19,7 +19,10 @@
 // worker" is not one person). The straight-forward and straight-up limits use single derived dimensions formed per
 // subject (shoulder-to-grip length, overhead grip reach); only the sphere between them combines two percentiles
 // (shoulder height and arm length), which for the small worker is on the safe side because the two are positively
-// correlated. The trunk does not lean or twist and the picker does not step onto the rack. Every constant that is
+// correlated. Above shoulder height the picker stands upright and the sphere governs; below it the picker bends the
+// knees and trunk to bring the shoulder down to the grip, so only the horizontal distance from the shoulder counts
+// (our simplification: a low pick is judged by the lifting equation's V and H, not by standing reach). The trunk
+// does not twist and the picker does not step onto the rack. Every constant that is
 // not from the survey data is a field of ReachParameters with its source or marked as our assumption.
 
 #include <optional>
@@ -121,7 +124,8 @@ struct ReachResult {
   HeightZone small_height_zone = HeightZone::elbow_to_shoulder;
   HeightZone large_height_zone = HeightZone::elbow_to_shoulder;
   DepthZone depth_zone = DepthZone::within_comfortable_reach;  ///< of the small worker
-  double small_shoulder_to_grip_cm = 0.0;  ///< straight-line distance from the small worker's shoulder pivot
+  double small_shoulder_to_grip_cm = 0.0;  ///< from the small worker's shoulder pivot: straight line above the
+                                           ///< shoulder, horizontal below it
   double small_max_reach_margin_cm = 0.0;  ///< the least of the sphere and overhead margins
   double small_comfortable_reach_margin_cm = 0.0;
   double h_cm = 0.0;  ///< the lifting equation's H for a lift from this point: ankles to the grip, horizontally

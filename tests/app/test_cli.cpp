@@ -154,6 +154,43 @@ TEST_CASE("Invalid input: exit 1, the JSON path named, nothing written to --out"
   CHECK(count >= 15);
 }
 
+TEST_CASE("Reach results in assess for tasks with shelf geometry", "[cli][reach]") {
+  const std::string sample = quote(shared_reference::repo_path("sample_tasks/motor-mount-truck-level.rackreach.json"));
+  const Run js = run_cli("assess " + sample + " --format json");
+  REQUIRE(js.exit_code == 0);
+  CHECK(js.err.empty());
+  const json out = json::parse(js.out);
+  REQUIRE(out.contains("reach_model"));
+  CHECK(out["reach_model"]["workforce"] == "ansur2, 50% women");
+  CHECK(out["reach_model"]["parameters_cm"]["ankle_to_rack_face"] == 25.0);
+  int with_reach = 0;
+  for (const auto& job : out["jobs"])
+    for (const auto& task : job["tasks"]) {
+      if (!task.contains("reach")) continue;
+      ++with_reach;
+      const auto& r = task["reach"];
+      // The model's H is the standing distance plus the grip depth; V is the grip height (the origin's V).
+      CHECK(r["v_cm"] == task["input"]["origin"]["v"]);
+      CHECK(r["h_cm"].get<double>() == Approx(task["input"]["origin"]["h"].get<double>()));
+      if (task["id"] == "top-shelf-back") {
+        // V 182 cm is above the equation's 175 cm: the reach result and the equation agree (VM = 0).
+        CHECK(task["origin"]["vm"] == 0.0);
+        bool v_limit = false;
+        for (const auto& c : r["checks"]) v_limit = v_limit || (c["code"] == "equation_v_limit" && !c["passed"]);
+        CHECK(v_limit);
+        CHECK(r["depth_zone"] == "beyond maximum reach");
+      }
+    }
+  CHECK(with_reach == 2);
+  const Run table = run_cli("assess " + sample);
+  CHECK_THAT(table.out, Catch::Matchers::Contains("Reach, task top-shelf-back"));
+  CHECK_THAT(table.out, Catch::Matchers::Contains("NOT MET: small worker (5th percentile"));
+  // An unknown workforce table is invalid input, named by its JSON path.
+  const Run bad = run_cli("assess " + quote(shared_reference::repo_path("tests/data/invalid_workforce_unknown_population.json")));
+  CHECK(bad.exit_code == 1);
+  CHECK_THAT(bad.err, Catch::Matchers::Contains("no-such-table"));
+}
+
 TEST_CASE("Exit codes: usage 2, --fail-above 3, --version, template round trip", "[cli][exit]") {
   CHECK(run_cli("").exit_code == 2);
   CHECK(run_cli("assess").exit_code == 2);

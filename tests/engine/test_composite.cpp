@@ -29,7 +29,7 @@ LiftJob make_job(std::vector<LiftTask> tasks) {
   j.id = "J";
   j.declared_duration = DurationCategory::moderate_duration;
   j.tasks = std::move(tasks);
-  j.frequency_samples.resize(j.tasks.size());
+  j.details.resize(j.tasks.size());
   return j;
 }
 

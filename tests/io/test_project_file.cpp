@@ -48,6 +48,10 @@ const Expected invalid_fixtures[] = {
     {"invalid_not_json", "parse_error", "jobs[0]"},
     {"invalid_top_level_array", "wrong_type", ""},
     {"invalid_h_zero", "out_of_range", "jobs[0].tasks[0].origin.h"},
+    {"invalid_shelf_beam_below_grip", "out_of_range", "jobs[0].tasks[0].shelf.beam_underside"},
+    {"invalid_shelf_negative_depth", "out_of_range", "jobs[0].tasks[0].shelf.grip_depth"},
+    {"invalid_workforce_women_share", "out_of_range", "workforce.women"},
+    {"invalid_reach_parameter_unknown", "unknown_key", "reach_parameters.ankle_to_rack_face_cm"},
 };
 
 }  // namespace

@@ -3,6 +3,7 @@
 // agreement with the lifting equation's H and V limits.
 
 #include <catch2/catch.hpp>
+#include <cmath>
 
 #include "engine/lifting/rnle_1994.hpp"
 #include "engine/reach/sagittal_reach.hpp"
@@ -193,4 +194,25 @@ TEST_CASE("invalid reach inputs are reported by field, value and rule", "[reach]
   CHECK(has("comfortable_reach_fraction", "at most 1"));
   CHECK(has("small.elbow_height_cm", "below acromial_height_cm"));
   CHECK(validate_reach_inputs(small_worker(), large_worker(), grip(100.0, 10.0), ReachParameters{}).empty());
+}
+
+TEST_CASE("below the shoulder only the horizontal distance counts; above it the sphere", "[reach]") {
+  // Our model's simplification: a picker bends down to a low grip, so its reach there is horizontal.
+  const ReachParameters params;
+  const ReachBody small = small_worker();
+  const Eigen::Vector2d shoulder = calc_shoulder_pivot(small, params);
+  const double depth_at_radius = shoulder.x() + small.shoulder_grip_length_cm;
+  for (double height : {10.0, 60.0, shoulder.y() - 0.1}) {
+    INFO("grip height " << height << " cm");
+    const ReachResult r = calc_reach(small, large_worker(), grip(height, depth_at_radius - 0.1), params);
+    CHECK(r.small_shoulder_to_grip_cm == Approx(small.shoulder_grip_length_cm - 0.1).margin(1e-9));
+    CHECK(check_of(r, "max_reach").passed);
+    CHECK(check_of(calc_reach(small, large_worker(), grip(height, depth_at_radius + 0.1), params), "max_reach")
+              .margin_cm == Approx(-0.1).margin(1e-9));
+  }
+  // 10 cm above the shoulder at the same depth the sphere is longer than the arm: out of reach.
+  const ReachResult above = calc_reach(small, large_worker(), grip(shoulder.y() + 10.0, depth_at_radius - 0.1), params);
+  CHECK(above.small_shoulder_to_grip_cm ==
+        Approx(std::hypot(small.shoulder_grip_length_cm - 0.1, 10.0)).margin(1e-9));
+  CHECK_FALSE(check_of(above, "max_reach").passed);
 }

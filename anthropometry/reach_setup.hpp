@@ -1,0 +1,25 @@
+// SPDX-License-Identifier: MIT
+#pragma once
+// The reach setup of a project: its workforce table mixed by sex, the small and the large worker taken from it,
+// and the reach model's parameters. The CLI and the desktop app both make it here.
+
+#include <filesystem>
+#include <optional>
+#include <string>
+#include <vector>
+
+#include "engine/assess.hpp"
+#include "engine/problem.hpp"
+#include "engine/project.hpp"
+
+namespace rackreach {
+
+struct LoadedReachSetup {
+  std::optional<ReachSetup> setup;
+  std::vector<Problem> problems;  ///< paths point into the project file's "workforce" where they can
+};
+
+/// Loads the workforce of `project` from `data_dir` (shipped tables) or a file, and forms its two workers.
+LoadedReachSetup load_reach_setup(const Project& project, const std::filesystem::path& data_dir);
+
+}  // namespace rackreach
