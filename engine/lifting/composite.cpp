@@ -27,19 +27,32 @@ std::vector<std::size_t> order_for_composite(const std::vector<CompositeItem>& i
 
 CompositeResult calc_composite_li(const std::vector<CompositeItem>& items, std::optional<DurationCategory> duration,
                                   RoundingMode mode) {
-  CompositeResult out;
   if (items.empty()) {
+    CompositeResult out;
     out.undefined_reason = "the job has no tasks";
     return out;
   }
   const std::vector<std::size_t> order = order_for_composite(items);
+  std::vector<CompositeItem> ordered;
+  ordered.reserve(items.size());
+  for (std::size_t i : order) ordered.push_back(items[i]);
+  return calc_composite_sum(ordered, duration, mode);
+}
+
+CompositeResult calc_composite_sum(const std::vector<CompositeItem>& ordered, std::optional<DurationCategory> duration,
+                                   RoundingMode mode) {
+  CompositeResult out;
+  if (ordered.empty()) {
+    out.undefined_reason = "the job has no tasks";
+    return out;
+  }
   double cumulative_f = 0.0;
   bool any_below_split = false;
   double fm_previous = 0.0;
   double cli = 0.0;
   std::optional<std::string> undefined;
-  for (std::size_t k = 0; k < order.size(); ++k) {
-    const CompositeItem& item = items[order[k]];
+  for (std::size_t k = 0; k < ordered.size(); ++k) {
+    const CompositeItem& item = ordered[k];
     cumulative_f += item.frequency_per_min;
     any_below_split = any_below_split || item.origin_v_below_split;
     CompositeTerm term{item.id, item.fili, item.stli, item.frequency_per_min, cumulative_f, 0.0, fm_previous, 0.0};

@@ -58,4 +58,10 @@ std::vector<std::size_t> order_for_composite(const std::vector<CompositeItem>& i
 CompositeResult calc_composite_li(const std::vector<CompositeItem>& items, std::optional<DurationCategory> duration,
                                   RoundingMode mode);
 
+/// Step 4 alone: the CLI sum over items already in procedure order (item 0 gives STLI_1), at the job's duration
+/// (empty: more than 8 h). calc_composite_li is order_for_composite followed by this; the Variable Lifting Index
+/// (variable_2016.hpp) applies it to FILI categories in its own order.
+CompositeResult calc_composite_sum(const std::vector<CompositeItem>& ordered, std::optional<DurationCategory> duration,
+                                   RoundingMode mode);
+
 }  // namespace rackreach
