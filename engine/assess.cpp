@@ -96,6 +96,18 @@ ProjectAssessment assess_project(const Project& project, const AssessOptions& op
   for (const LiftJob& job : project.jobs)
     out.jobs.push_back(assess_job(job, project.units, out.duration_rule, options.rounding,
                                   options.reach ? &*options.reach : nullptr));
+  if (!project.store.slots.empty()) {
+    ReviewOptions ro;
+    ro.rounding = options.rounding;
+    ro.duration_rule = out.duration_rule;
+    ro.bands = options.bands;
+    if (options.reach) {
+      ro.small = &options.reach->small;
+      ro.large = &options.reach->large;
+      ro.reach_parameters = options.reach->parameters;
+    }
+    out.store = review_store(project.store, project.units, ro);
+  }
   return out;
 }
 

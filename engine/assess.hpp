@@ -11,6 +11,7 @@
 #include "engine/lifting/risk_bands.hpp"
 #include "engine/lifting/rnle_1994.hpp"
 #include "engine/project.hpp"
+#include "engine/slotting/review.hpp"
 
 namespace rackreach {
 
@@ -49,6 +50,7 @@ struct ProjectAssessment {
   RiskBands bands;
   std::optional<ReachSetup> reach;
   std::vector<JobAssessment> jobs;
+  std::optional<StoreReview> store;  ///< when the project has slots
 };
 
 JobAssessment assess_job(const LiftJob& job, UnitSystem units, DurationRule rule, RoundingMode mode,

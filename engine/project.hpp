@@ -11,6 +11,7 @@
 #include "engine/lifting/rnle_1994.hpp"
 #include "engine/quantities.hpp"
 #include "engine/reach/sagittal_reach.hpp"
+#include "engine/slotting/store.hpp"
 
 namespace rackreach {
 
@@ -71,8 +72,10 @@ struct Project {
   ReachParameters reach_parameters;      ///< in cm; defaults unless the file overrides them
   std::vector<std::string> reach_parameters_set;  ///< names of the parameters the file overrides
   std::vector<LiftJob> jobs;
+  Store store;  ///< racks, parts, slots and routes; empty for a file of explicit lift jobs only
 
   bool has_shelf_geometry() const {
+    if (!store.slots.empty()) return true;
     for (const LiftJob& j : jobs)
       for (const TaskDetails& d : j.details)
         if (d.shelf) return true;

@@ -10,6 +10,7 @@
 #include "engine/io/assessment_output.hpp"
 #include "engine/io/atomic_file.hpp"
 #include "engine/io/project_file.hpp"
+#include "engine/io/review_output.hpp"
 
 namespace rackreach::cli {
 namespace {
@@ -37,6 +38,18 @@ bool exceeds(const ProjectAssessment& a, double threshold, std::string& worst) {
       if (worst.empty()) worst = "job " + j.id + " (CLI)";
     }
   }
+  if (a.store) {
+    for (const SlotFinding& f : a.store->findings)  // ranked: the first one over is the worst
+      if (!f.result.li || *f.result.li > threshold) {
+        over = true;
+        if (worst.empty()) worst = "slot " + f.slot_id + (f.result.li ? "" : " (outside the equation)");
+      }
+    for (const RouteResult& r : a.store->routes)
+      if (!r.vli || *r.vli > threshold) {
+        over = true;
+        if (worst.empty()) worst = "route " + r.id;
+      }
+  }
   return over;
 }
 
@@ -46,8 +59,9 @@ void add_assess_command(CLI::App& app, int& exit_code) {
   auto* cmd = app.add_subcommand("assess", "Assess the lift jobs of a project file");
   auto args = std::make_shared<AssessArgs>();
   cmd->add_option("FILE", args->file, "project file (*.rackreach.json)")->required();
-  cmd->add_option("--format", args->format, "table (for people), json or csv")
-      ->check(CLI::IsMember({"table", "json", "csv"}))
+  cmd->add_option("--format", args->format,
+                  "table (for people), json, csv (the slot findings, or the lift tasks of a file without slots) or html")
+      ->check(CLI::IsMember({"table", "json", "csv", "html"}))
       ->capture_default_str();
   cmd->add_option("--rounding", args->rounding,
                   "full precision, or worksheet: multipliers to 2 decimals, weights and indices to 1")
@@ -84,7 +98,9 @@ void add_assess_command(CLI::App& app, int& exit_code) {
     const OutputHeader header{args->file};
     std::string text;
     if (args->format == "json") text = write_assessment_json(*r.project, a, header);
+    else if (args->format == "csv" && a.store) text = write_review_csv(*r.project, *a.store);
     else if (args->format == "csv") text = write_assessment_csv(*r.project, a, header);
+    else if (args->format == "html") text = write_assessment_html(*r.project, a, header);
     else text = write_assessment_table(*r.project, a, header);
     if (args->out.empty()) {
       std::cout << text;

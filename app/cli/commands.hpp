@@ -16,6 +16,7 @@ enum ExitCode : int { exit_ok = 0, exit_invalid_input = 1, exit_usage = 2, exit_
 void add_assess_command(CLI::App& app, int& exit_code);
 void add_check_command(CLI::App& app, int& exit_code);
 void add_template_command(CLI::App& app, int& exit_code);
+void add_limits_command(CLI::App& app, int& exit_code);
 
 /// Prints every problem to stderr, one per line, naming the file.
 void print_problems(const std::string& file, const std::vector<Problem>& problems);

@@ -7,6 +7,7 @@
 
 #include "engine/caution.hpp"
 #include "engine/io/json_writer.hpp"
+#include "engine/io/review_output.hpp"
 #include "engine/version.hpp"
 
 namespace rackreach {
@@ -185,6 +186,11 @@ std::string write_assessment_json(const Project& project, const ProjectAssessmen
     write_reach_model(w, project, *a.reach);
     w.line_break("\n ");
   }
+  if (a.store) {
+    w.key("store");
+    write_review_json(w, project, *a.store, a.rounding);
+    w.line_break("\n ");
+  }
   w.key("jobs").begin_array();
   for (std::size_t i = 0; i < a.jobs.size(); ++i) {
     w.line_break("\n  ");
@@ -320,8 +326,25 @@ std::string write_assessment_table(const Project& project, const ProjectAssessme
           s += "    - task \"" + r.id + "\": " + describe_warning(w, u) + " [" + std::string(warning_code(w)) + "]\n";
     }
   }
+  if (a.store) s += write_review_table(project, *a.store, a.rounding);
   s += "\nCaution: " + std::string(caution_text) + "\n";
   return s;
+}
+
+std::string write_assessment_html(const Project& project, const ProjectAssessment& a, const OutputHeader& h) {
+  ProjectAssessment jobs_only = a;
+  jobs_only.store.reset();
+  std::string jobs_text = a.jobs.empty() ? std::string() : write_assessment_table(project, jobs_only, h);
+  std::string escaped;
+  for (char c : jobs_text) escaped += c == '<' ? "&lt;" : c == '>' ? "&gt;" : c == '&' ? "&amp;" : std::string(1, c);
+  std::string page = a.store ? write_review_html(project, *a.store, h.input_name)
+                             : "<!DOCTYPE html>\n<html lang=\"en\"><head><meta charset=\"utf-8\"><title>Rackreach lift "
+                               "assessment</title></head><body>\n<p>" + std::string(caution_text) + "</p>\n</body></html>\n";
+  if (!escaped.empty()) {
+    const auto at = page.rfind("</body>");
+    page.insert(at, "<h2>Lift jobs</h2>\n<pre>" + escaped + "</pre>\n");
+  }
+  return page;
 }
 
 std::string csv_cell(std::string_view text) {

@@ -18,6 +18,8 @@ struct OutputHeader {
 std::string write_assessment_json(const Project& project, const ProjectAssessment& a, const OutputHeader& h);
 std::string write_assessment_table(const Project& project, const ProjectAssessment& a, const OutputHeader& h);
 std::string write_assessment_csv(const Project& project, const ProjectAssessment& a, const OutputHeader& h);
+/// HTML: the slot review page when the project has slots, with the lift jobs as preformatted text after it.
+std::string write_assessment_html(const Project& project, const ProjectAssessment& a, const OutputHeader& h);
 
 /// A CSV cell: quoted when needed, and neutralised (a leading apostrophe) when a spreadsheet would run it as a
 /// formula (it starts with =, +, -, @, tab or carriage return) and is not a plain number.

@@ -7,6 +7,7 @@
 #include <sstream>
 
 #include "engine/io/json_reader.hpp"
+#include "engine/io/store_loader.hpp"
 
 namespace rackreach {
 namespace {
@@ -97,7 +98,8 @@ class ProjectLoader {
     const JsonPath root;
     if (!r_.object(doc, root,
                    {"rackreach", "units", "title", "site", "assessor", "date", "duration_rule", "workforce",
-                    "reach_parameters", "jobs"}))
+                    "reach_parameters", "jobs", "shift", "demand", "zones", "racks", "parts", "slots", "routes",
+                    "reference_box", "limit_frequencies"}))
       return std::nullopt;
     Project p;
     if (const json* v = r_.member(doc, root, "rackreach", true)) {
@@ -118,11 +120,15 @@ class ProjectLoader {
     if (const json* rp = r_.member(doc, root, "reach_parameters", false))
       load_reach_parameters(*rp, JsonPath(root, "reach_parameters"), p);
 
-    if (const json* jobs = r_.member(doc, root, "jobs", true)) {
+    load_store(r_, problems_, doc, p.units, p.store);
+    // A file holds explicit lift jobs, a store with slots, or both; either may be left out, not both.
+    const bool has_slots = doc.contains("slots");
+    if (const json* jobs = r_.member(doc, root, "jobs", !has_slots)) {
       const JsonPath jobs_path(root, "jobs");
+      const std::size_t min_jobs = has_slots ? 0 : 1;
       if (jobs_streamed) {
-        if (jobs_seen_ == 0) r_.add("empty", jobs_path, jobs, "must hold at least 1 jobs");
-      } else if (r_.array(*jobs, jobs_path, 1, "jobs")) {
+        if (jobs_seen_ < min_jobs) r_.add("empty", jobs_path, jobs, "must hold at least 1 jobs (or give slots)");
+      } else if (r_.array(*jobs, jobs_path, min_jobs, "jobs")) {
         for (std::size_t i = 0; i < jobs->size(); ++i) add_job((*jobs)[i], i);
       }
     }

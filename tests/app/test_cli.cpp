@@ -9,6 +9,7 @@
 #include <cstdlib>
 #include <filesystem>
 #include <nlohmann/json.hpp>
+#include <set>
 #include <string>
 
 #include "tests/shared_reference.hpp"
@@ -189,6 +190,70 @@ TEST_CASE("Reach results in assess for tasks with shelf geometry", "[cli][reach]
   const Run bad = run_cli("assess " + quote(shared_reference::repo_path("tests/data/invalid_workforce_unknown_population.json")));
   CHECK(bad.exit_code == 1);
   CHECK_THAT(bad.err, Catch::Matchers::Contains("no-such-table"));
+}
+
+namespace {
+
+/// Compares two JSON documents: the same structure and strings, numbers within a relative tolerance.
+void check_same_json(const json& a, const json& e, const std::string& where) {
+  INFO(where);
+  REQUIRE(a.type() == e.type());
+  if (e.is_object()) {
+    REQUIRE(a.size() == e.size());
+    for (auto it = e.begin(); it != e.end(); ++it) {
+      REQUIRE(a.contains(it.key()));
+      if (it.key() == "input") continue;  // the path the file was given as
+      check_same_json(a[it.key()], it.value(), where + "." + it.key());
+    }
+  } else if (e.is_array()) {
+    REQUIRE(a.size() == e.size());
+    for (std::size_t i = 0; i < e.size(); ++i) check_same_json(a[i], e[i], where + "[" + std::to_string(i) + "]");
+  } else if (e.is_number()) {
+    CHECK(a.get<double>() == Approx(e.get<double>()).epsilon(1e-9).margin(1e-12));
+  } else {
+    CHECK(a == e);
+  }
+}
+
+}  // namespace
+
+TEST_CASE("The demo store's review is a golden test", "[cli][store][golden]") {
+  // Golden output written by this version and checked by hand against the slot-review rules (our own example).
+  const std::string sample = quote(shared_reference::repo_path("sample_tasks/kitting-store.rackreach.json"));
+  const Run js = run_cli("assess " + sample + " --format json");
+  REQUIRE(js.exit_code == 0);
+  CHECK(js.err.empty());
+  const auto expected = shared_reference::read_text(shared_reference::repo_path("tests/expected/kitting-store.assess.json"));
+  REQUIRE(expected);
+  check_same_json(json::parse(js.out), json::parse(*expected), "$");
+  // Every band, a truck part, a move to the waist zone, a reach failure and the shift-over-8-hours caution.
+  const json out = json::parse(js.out);
+  std::set<std::string> bands, remedies;
+  bool reach_failure = false;
+  for (const auto& f : out["store"]["findings"]) {
+    bands.insert(f["band"].get<std::string>());
+    for (const auto& r : f["remedies"]) remedies.insert(r["remedy"].get<std::string>());
+    if (f.contains("reach") && !f["reach"]["failure"].is_null()) reach_failure = true;
+  }
+  for (const char* b : {"within limit", "elevated", "high", "very high", "outside equation"}) CHECK(bands.count(b));
+  CHECK(remedies.count("move to waist zone"));
+  CHECK(remedies.count("truck level only"));
+  CHECK(reach_failure);
+  bool over_8h = false;
+  for (const auto& w : out["store"]["warnings"]) over_8h = over_8h || w["code"] == "limit.duration_over_8h";
+  CHECK(over_8h);
+  CHECK(out["store"]["routes"].size() == 3);
+  // The other formats run cleanly too.
+  for (const char* f : {"table", "csv", "html"}) {
+    const Run r = run_cli("assess " + sample + " --format " + f);
+    INFO(f);
+    CHECK(r.exit_code == 0);
+    CHECK(r.err.empty());
+  }
+  const Run limits = run_cli("limits " + sample);
+  CHECK(limits.exit_code == 0);
+  CHECK_THAT(limits.out, Catch::Matchers::Contains("Level limits"));
+  CHECK(run_cli("assess " + sample + " --fail-above 1.0").exit_code == 3);
 }
 
 TEST_CASE("Exit codes: usage 2, --fail-above 3, --version, template round trip", "[cli][exit]") {

@@ -52,6 +52,19 @@ const Expected invalid_fixtures[] = {
     {"invalid_shelf_negative_depth", "out_of_range", "jobs[0].tasks[0].shelf.grip_depth"},
     {"invalid_workforce_women_share", "out_of_range", "workforce.women"},
     {"invalid_reach_parameter_unknown", "unknown_key", "reach_parameters.ankle_to_rack_face_cm"},
+    {"invalid_slot_unknown_part", "unknown_reference", "slots[0].part"},
+    {"invalid_slot_unknown_level", "unknown_reference", "slots[0].level"},
+    {"invalid_slot_unknown_rack", "unknown_reference", "slots[0].rack"},
+    {"invalid_slot_bay_beyond_rack", "out_of_range", "slots[0].bay"},
+    {"invalid_slot_duplicate_location", "duplicate_location", "slots[1]"},
+    {"invalid_route_unknown_slot", "unknown_reference", "routes[0].slots[1]"},
+    {"invalid_rack_unknown_zone", "unknown_reference", "racks[0].zone"},
+    {"invalid_levels_overlap", "out_of_range", "racks[0].levels[1].surface_height"},
+    {"invalid_shift_bad_time", "invalid_value", "shift.start"},
+    {"invalid_part_missing_box", "missing_key", "parts[0].box"},
+    {"invalid_part_coupling_and_handhold", "invalid_value", "parts[0].handhold"},
+    {"invalid_slots_without_demand", "missing_key", "demand"},
+    {"invalid_level_access_not_rack_kind", "invalid_value", "racks[0].levels[0].access"},
 };
 
 }  // namespace
@@ -101,6 +114,21 @@ TEST_CASE("The published cases load through the project-file contract", "[io][ca
     for (const auto& p : r.problems) INFO(format_problem(name, p));
     CHECK(r.project.has_value());
   }
+}
+
+TEST_CASE("A store loads: racks, parts, slots, routes; a slot's unknown part names both", "[io][store]") {
+  const LoadResult r = load_project_file(shared_reference::repo_path("tests/data/store_minimal.rackreach.json"));
+  for (const auto& p : r.problems) INFO(format_problem("store_minimal", p));
+  REQUIRE(r.project);
+  CHECK(r.project->jobs.empty());
+  CHECK(r.project->store.slots.size() == 1);
+  CHECK(r.project->store.zones[0].cart_h.source == ValueSource::built_in_default);  // default, visible as such
+  CHECK(r.project->store.zones[0].standing_distance.source == ValueSource::file);
+  const LoadResult bad = load_project_file(shared_reference::repo_path("tests/data/invalid_slot_unknown_part.json"));
+  REQUIRE(bad.problems.size() == 1);
+  const std::string msg = format_problem("f.json", bad.problems[0]);
+  CHECK_THAT(msg, Catch::Matchers::Contains("slot \"S1\""));
+  CHECK_THAT(msg, Catch::Matchers::Contains("\"P9\""));
 }
 
 TEST_CASE("The template loads and is valid in both unit systems", "[io][template]") {

@@ -1,0 +1,436 @@
+// SPDX-License-Identifier: MIT
+#include "engine/slotting/review.hpp"
+
+#include <algorithm>
+#include <cmath>
+#include <cstdio>
+#include <limits>
+#include <map>
+#include <unordered_map>
+
+#include "engine/lifting/composite.hpp"
+#include "engine/lifting/variable_2016.hpp"
+#include "engine/slotting/coupling_class.hpp"
+
+namespace rackreach {
+
+const char* remedy_name(RemedyKind k) {
+  switch (k) {
+    case RemedyKind::move_to_waist_zone: return "move to waist zone";
+    case RemedyKind::move_to_front: return "move to front of shelf";
+    case RemedyKind::truck_level_only: return "truck level only";
+    case RemedyKind::split_the_pack: return "split the pack";
+    case RemedyKind::mechanical_aid: return "mechanical aid or team lift";
+    case RemedyKind::clearance_too_small: return "clearance too small";
+    case RemedyKind::outside_scope: return "outside the equation's scope";
+  }
+  return "?";
+}
+
+namespace {
+
+/// The CLI is also given for routes of at most this many picks (our rule: the manual's CLI procedure is meant for
+/// a few distinct tasks; the VLI for many).
+constexpr std::size_t max_tasks_for_cli = 10;
+
+std::string num(double x, int decimals = 1) {
+  char buf[48];
+  std::snprintf(buf, sizeof buf, "%.*f", decimals, x);
+  return buf;
+}
+
+/// Where a part could sit: one level of one rack at one depth position (every slot there is alike).
+struct Place {
+  const Rack* rack = nullptr;
+  const Level* level = nullptr;
+  const Zone* zone = nullptr;
+  SlotPosition position = SlotPosition::front;
+  std::optional<DurationCategory> duration;
+};
+
+class Reviewer {
+ public:
+  Reviewer(const Store& s, UnitSystem u, const ReviewOptions& o) : s_(s), u_(u), o_(o) {
+    for (const Part& p : s.parts) parts_.emplace(p.id, &p);
+    for (const Rack& r : s.racks) racks_.emplace(r.id, &r);
+    for (const Zone& z : s.zones) zones_.emplace(z.id, &z);
+    shift_pattern_ = s.shift ? s.shift->work_pattern() : Shift{}.work_pattern();
+    // The hand-pick places of the store, for the remedies and the hand/truck decisions.
+    for (const Rack& r : s.racks)
+      for (const Level& l : r.levels)
+        if (l.access == LevelAccess::hand)
+          for (SlotPosition pos : {SlotPosition::front, SlotPosition::back})
+            hand_places_.push_back({&r, &l, find_zone(r), pos, duration_of(find_zone(r))});
+  }
+
+  StoreReview run() {
+    StoreReview out;
+    out.shift_duration = calc_duration(shift_pattern_, o_.duration_rule);
+    if (!s_.shift && !s_.slots.empty())
+      out.warnings.push_back({WarningKind::duration_over_8h, LiftEnd::origin, 0.0, 0.0,
+                              "no shift given: an 8-hour shift without breaks is assumed (06:00-14:00)"});
+    if (!out.shift_duration.category)
+      out.warnings.push_back({WarningKind::duration_over_8h, LiftEnd::origin, 0.0, long_limit_hours,
+                              "the shift has more than 8 h of lifting: " + out.shift_duration.explanation +
+                                  "; zones without a lifting pattern of their own are outside the equation"});
+    out.findings.reserve(s_.slots.size());
+    std::unordered_map<std::string, std::size_t> finding_of_slot;
+    for (std::size_t i = 0; i < s_.slots.size(); ++i) {
+      out.findings.push_back(review_slot(i));
+      finding_of_slot.emplace(s_.slots[i].id, i);
+    }
+    decide_parts(out);
+    out.level_limits = calc_level_limits();
+    for (const Route& r : s_.routes) out.routes.push_back(review_route(r, out.findings, finding_of_slot));
+    rank(out.findings);
+    return out;
+  }
+
+ private:
+  const Zone* find_zone(const Rack& r) const {
+    auto it = zones_.find(r.zone);
+    return it == zones_.end() ? nullptr : it->second;
+  }
+
+  std::optional<DurationCategory> duration_of(const Zone* z) const {
+    const std::vector<WorkPeriod>& pattern = z && z->lifting_pattern ? *z->lifting_pattern : shift_pattern_;
+    return calc_duration(pattern, o_.duration_rule).category;
+  }
+
+  double zone_value(const Zone* z, SourcedValue Zone::*field, double default_cm_or_deg, bool is_length) const {
+    if (z) return (z->*field).value;
+    return is_length ? Length{default_cm_or_deg, UnitSystem::metric}.in_units(u_) : default_cm_or_deg;
+  }
+
+  /// The lift of `part` picked from `place` (at the slot's own overrides, if any).
+  DerivedLift derive(const Part& part, const Place& place, const Slot* slot) const {
+    DerivedLift d;
+    const Zone* z = place.zone;
+    d.grip_height = part.grip_height.value_or(part.box.height / 2.0);
+    const double shelf = place.rack->shelf_depth;
+    d.hands_in_shelf = place.position == SlotPosition::front ? part.box.depth / 2.0
+                                                             : std::max(part.box.depth / 2.0, shelf - part.box.depth / 2.0);
+    if (slot && slot->standing_distance) d.standing_distance = {*slot->standing_distance, ValueSource::file};
+    else if (z) d.standing_distance = {z->standing_distance.value, z->standing_distance.source == ValueSource::file
+                                                                       ? ValueSource::zone_default
+                                                                       : ValueSource::built_in_default};
+    else d.standing_distance = {Length{ZoneDefaults::standing_distance_cm, UnitSystem::metric}.in_units(u_),
+                                ValueSource::built_in_default};
+    const CouplingClass cc = calc_coupling_class(part, u_);
+    d.coupling_reason = cc.reason;
+    d.lifts_per_kit = part.pieces_per_kit / part.pieces_per_grasp;
+    LiftTask& t = d.task;
+    t.id = slot ? slot->id : place.rack->id + "/" + place.level->id;
+    t.load = part.unit_weight * part.pieces_per_grasp;
+    t.frequency_per_min = s_.kits_per_hour * d.lifts_per_kit / 60.0;
+    t.coupling = cc.coupling;
+    t.origin = {d.standing_distance.value + d.hands_in_shelf, place.level->surface_height + d.grip_height,
+                slot && slot->origin_angle_deg ? *slot->origin_angle_deg
+                                               : zone_value(z, &Zone::origin_angle_deg, ZoneDefaults::origin_angle_deg, false)};
+    t.destination = {zone_value(z, &Zone::cart_h, ZoneDefaults::cart_h_cm, true),
+                     zone_value(z, &Zone::cart_deck_height, ZoneDefaults::cart_deck_height_cm, true) + d.grip_height,
+                     zone_value(z, &Zone::turn_angle_deg, ZoneDefaults::turn_angle_deg, false)};
+    t.control_at_destination = z && z->control_at_destination;
+    if (z) t.limits = z->limits;
+    return d;
+  }
+
+  TaskResult evaluate(const DerivedLift& d, const Place& place) const {
+    return evaluate_task(d.task, place.duration, u_, o_.rounding);
+  }
+
+  std::optional<ReachResult> reach_of(const DerivedLift& d, const Place& place) const {
+    if (!o_.small || !o_.large) return std::nullopt;
+    ReachQuery q;
+    q.grip_height_cm = Length{d.task.origin.v, u_}.in_cm();
+    q.grip_depth_cm = Length{d.hands_in_shelf, u_}.in_cm();
+    q.structure_above_grip_cm = Length{place.level->surface_height + place.level->clear_height, u_}.in_cm();
+    ReachParameters p = o_.reach_parameters;
+    p.ankle_to_rack_face_cm = Length{d.standing_distance.value, u_}.in_cm();
+    if (!validate_reach_inputs(*o_.small, *o_.large, q, p).empty()) return std::nullopt;
+    return calc_reach(*o_.small, *o_.large, q, p);
+  }
+
+  /// The waist zone for remedies: from the small worker's grip-centre height to the large worker's elbow height
+  /// (with footwear), the span where both lift between knuckle and elbow; without a workforce, V 75 cm (30 in)
+  /// +- 25 cm, the equation's optimum.
+  std::pair<double, double> waist_zone() const {
+    if (o_.small && o_.large) {
+      const double shoe = o_.reach_parameters.footwear_allowance_cm;
+      return {Length{o_.small->grip_centre_height_cm + shoe, UnitSystem::metric}.in_units(u_),
+              Length{o_.large->elbow_height_cm + shoe, UnitSystem::metric}.in_units(u_)};
+    }
+    const double v = find_constants(u_).v_optimum, w = Length{25.0, UnitSystem::metric}.in_units(u_);
+    return {v - w, v + w};
+  }
+
+  struct Alternative {
+    const Place* place = nullptr;
+    std::optional<double> li;
+  };
+
+  /// The hand place with the lowest LI for a part (front and back of every hand level), optionally only those
+  /// whose origin V lies in the waist zone.
+  Alternative best_hand_place(const Part& part, bool waist_only) const {
+    Alternative best;
+    const auto [lo, hi] = waist_zone();
+    for (const Place& pl : hand_places_) {
+      if (part.box.height > pl.level->clear_height) continue;
+      const DerivedLift d = derive(part, pl, nullptr);
+      if (waist_only && (d.task.origin.v < lo || d.task.origin.v > hi)) continue;
+      const TaskResult r = evaluate(d, pl);
+      if (!r.li) continue;
+      if (auto reach = reach_of(d, pl); reach && reach->find_worst_failure()) continue;
+      if (!best.li || *r.li < *best.li) best = {&pl, r.li};
+    }
+    return best;
+  }
+
+  static std::string place_name(const Place& p) {
+    return "rack " + p.rack->id + " level " + p.level->id + " " + (p.position == SlotPosition::front ? "front" : "back");
+  }
+
+  SlotFinding review_slot(std::size_t index) const {
+    const Slot& slot = s_.slots[index];
+    SlotFinding f;
+    f.slot_index = index;
+    f.slot_id = slot.id;
+    f.part_id = slot.part;
+    f.rack_id = slot.rack;
+    f.level_id = slot.level;
+    const Part& part = *parts_.at(slot.part);
+    const Rack& rack = *racks_.at(slot.rack);
+    const Level& level = *s_.find_level(rack, slot.level);
+    f.family = part.family;
+    const Place place{&rack, &level, find_zone(rack), slot.position, duration_of(find_zone(rack))};
+    f.lift = derive(part, place, &slot);
+    f.result = evaluate(f.lift, place);
+    f.band = find_band(f.result.li, o_.bands);
+    f.truck_access = level.access == LevelAccess::truck;
+    if (f.truck_access) return f;  // a lift-truck pick: shown, not judged as a manual lift
+    f.reach = reach_of(f.lift, place);
+    if (f.reach)
+      for (const ReachCheck& c : f.reach->checks)
+        if (!c.passed && !c.advisory) f.warnings.push_back({WarningKind::reach_limit, LiftEnd::origin, c.margin_cm, 0.0, c.message});
+    add_remedies(f, part, place);
+    return f;
+  }
+
+  void add_remedies(SlotFinding& f, const Part& part, const Place& place) const {
+    const std::string mass(mass_unit(u_)), len(length_unit(u_));
+    const TaskResult& r = f.result;
+    const bool over = !r.li || *r.li > o_.bands.elevated_above;
+    const bool reach_fails = f.reach && f.reach->find_worst_failure();
+    if (part.box.height > place.level->clear_height)
+      f.remedies.push_back({RemedyKind::clearance_too_small,
+                            "the box is " + num(part.box.height) + " " + len + " high, the level's clear height is " +
+                                num(place.level->clear_height) + " " + len,
+                            place.level->clear_height, {}});
+    else if (f.reach)
+      for (const ReachCheck& c : f.reach->checks)
+        if (c.code == "hand_clearance" && !c.passed)
+          f.remedies.push_back({RemedyKind::clearance_too_small, c.message, c.margin_cm, {}});
+    if (!r.li) {
+      std::string why;
+      for (const Warning& w : r.warnings)
+        if (warning_code(w).substr(0, 8) == "outside." || w.kind == WarningKind::duration_over_8h)
+          why += (why.empty() ? "" : "; ") + describe_warning(w, u_);
+      f.remedies.push_back({RemedyKind::outside_scope, why.empty() ? "the lift is outside the equation" : why, {}, {}});
+    }
+    if (!over && !reach_fails) return;
+    // Front of the shelf: the same part and level, hands nearer.
+    if (place.position == SlotPosition::back) {
+      Place front = place;
+      front.position = SlotPosition::front;
+      const DerivedLift d = derive(part, front, &s_.slots[f.slot_index]);
+      const TaskResult fr = evaluate(d, front);
+      const auto freach = reach_of(d, front);
+      const bool better = fr.li && (!r.li || *fr.li < *r.li - 1e-9);
+      if (better || (reach_fails && freach && !freach->find_worst_failure()))
+        f.remedies.push_back({RemedyKind::move_to_front,
+                              "at the front of the same level H is " + num(d.task.origin.h) + " " + len +
+                                  " instead of " + num(f.lift.task.origin.h) + " " + len +
+                                  (fr.li ? ": LI " + num(*fr.li, 2) : std::string()),
+                              fr.li, "front"});
+    }
+    // Waist zone: the best hand level whose origin lies between knuckle and elbow height.
+    const auto [lo, hi] = waist_zone();
+    const double v = f.lift.task.origin.v;
+    if (v < lo || v > hi) {
+      const Alternative alt = best_hand_place(part, true);
+      if (alt.li && (!r.li || *alt.li < *r.li - 1e-9))
+        f.remedies.push_back({RemedyKind::move_to_waist_zone,
+                              "V " + num(v) + " " + len + " is outside the waist zone (" + num(lo) + "-" + num(hi) +
+                                  " " + len + "); at " + place_name(*alt.place) + " the LI is " + num(*alt.li, 2),
+                              alt.li, place_name(*alt.place)});
+    }
+    if (!over) return;
+    // Split the pack: n lifts of load/n at n x F, the fewest n that brings the LI to 1.0 or below. Only a pack
+    // of several pieces, or a grasp of several pieces, can be split; a single part cannot.
+    if (r.li && (part.pack_pieces > 1 || part.pieces_per_grasp > 1)) {
+      for (int n = 2; n <= 12; ++n) {
+        LiftTask split = f.lift.task;
+        split.frequency_per_min = f.lift.task.frequency_per_min * n;
+        split.load = f.lift.task.load / n;
+        const TaskResult sr = evaluate_task(split, place.duration, u_, o_.rounding);
+        const PointResult& g = sr.governing_point();
+        if (sr.li && *sr.li <= 1.0 && g.rwl > 0.0) {
+          f.remedies.push_back({RemedyKind::split_the_pack,
+                                "at this slot a unit of at most " + num(g.rwl, 1) + " " + mass + " gives LI 1.0 (" +
+                                    std::to_string(n) + " lifts instead of one, " + num(split.frequency_per_min, 2) +
+                                    " lifts/min)",
+                                g.rwl, std::to_string(n) + " lifts"});
+          break;
+        }
+      }
+    }
+    // No hand place of the store takes the part within the limit: truck level, and for the worst, a mechanical aid.
+    const Alternative best = best_hand_place(part, false);
+    const bool no_hand_place = !best.li || *best.li > o_.bands.elevated_above;
+    if (no_hand_place)
+      f.remedies.push_back({RemedyKind::truck_level_only,
+                            best.li ? "no hand slot of the store gives LI 1.0 or below (best: LI " + num(*best.li, 2) +
+                                          " at " + place_name(*best.place) + ")"
+                                    : std::string("no hand slot of the store takes this part within the equation"),
+                            best.li, "truck access"});
+    const double lc = find_constants(u_).lc;
+    if (f.lift.task.load > lc)
+      f.remedies.push_back({RemedyKind::mechanical_aid,
+                            "the load of " + num(f.lift.task.load) + " " + mass +
+                                " is above the equation's load constant (" + num(lc, 0) + " " + mass +
+                                "): no hand slot can take it",
+                            {}, {}});
+    else if (no_hand_place && (!r.li || *r.li > o_.bands.very_high_above))
+      f.remedies.push_back({RemedyKind::mechanical_aid,
+                            r.li ? "LI " + num(*r.li, 2) + " is above " + num(o_.bands.very_high_above) +
+                                       " and no hand slot brings it to 1.0"
+                                 : std::string("outside the equation here and no hand slot brings it to LI 1.0"),
+                            {}, {}});
+  }
+
+  void decide_parts(StoreReview& out) const {
+    std::map<std::string, std::size_t> family_index;
+    std::unordered_map<std::string, bool> on_truck_level;
+    for (const Slot& sl : s_.slots) {
+      const Rack& rack = *racks_.at(sl.rack);
+      if (s_.find_level(rack, sl.level)->access == LevelAccess::truck) on_truck_level[sl.part] = true;
+    }
+    for (const Part& p : s_.parts) {
+      PartDecision d;
+      d.part_id = p.id;
+      d.family = p.family;
+      const Alternative best = best_hand_place(p, false);
+      d.best_hand_li = best.li;
+      if (best.place) d.best_hand_slot = place_name(*best.place);
+      if (p.truck_only) {
+        d.hand = false;
+        d.reason = "truck only, as the file says";
+      } else if (!best.li || *best.li > o_.bands.elevated_above) {
+        d.hand = false;
+        d.reason = best.li ? "no hand slot gives LI 1.0 or below (best LI " + num(*best.li, 2) + " at " +
+                                 d.best_hand_slot + ")"
+                           : "no hand slot takes it within the equation";
+      } else {
+        d.hand = true;
+        d.reason = "LI " + num(*best.li, 2) + " at " + d.best_hand_slot +
+                   (on_truck_level.count(p.id) ? "; now slotted on a truck level" : "");
+      }
+      auto [it, fresh] = family_index.emplace(p.family, out.family_decisions.size());
+      if (fresh) out.family_decisions.push_back({p.family, FamilyDecision::Pick::hand, {}, {}, {}});
+      FamilyDecision& fam = out.family_decisions[it->second];
+      (d.hand ? fam.hand_parts : fam.truck_parts).push_back(p.id);
+      out.part_decisions.push_back(std::move(d));
+    }
+    for (FamilyDecision& fam : out.family_decisions) {
+      fam.pick = fam.truck_parts.empty() ? FamilyDecision::Pick::hand
+                 : fam.hand_parts.empty() ? FamilyDecision::Pick::truck
+                                          : FamilyDecision::Pick::split;
+      fam.reason = fam.pick == FamilyDecision::Pick::hand    ? "every part can be hand-picked within the limit"
+                   : fam.pick == FamilyDecision::Pick::truck ? "no part of the family can be hand-picked within the limit"
+                                                             : std::to_string(fam.truck_parts.size()) + " of " +
+                                                                   std::to_string(fam.truck_parts.size() + fam.hand_parts.size()) +
+                                                                   " parts need truck access";
+    }
+  }
+
+  std::vector<LevelLimit> calc_level_limits() const {
+    std::vector<LevelLimit> out;
+    Part ref;
+    ref.id = "reference box";
+    ref.box = s_.reference_box.box;
+    ref.coupling = s_.reference_box.coupling;
+    for (const Rack& r : s_.racks)
+      for (const Level& l : r.levels)
+        for (SlotPosition pos : {SlotPosition::front, SlotPosition::back}) {
+          const Place place{&r, &l, find_zone(r), pos, duration_of(find_zone(r))};
+          DerivedLift d = derive(ref, place, nullptr);
+          LevelLimit lim{r.id, l.id, pos, l.access, d.task.origin.v, d.task.origin.h, {}};
+          for (double f : s_.limit_frequencies_per_min) {
+            d.task.frequency_per_min = f;
+            d.task.load = 1.0;  // the RWL does not depend on the load
+            const TaskResult tr = evaluate(d, place);
+            const double rwl = tr.governing_point().rwl;
+            lim.rwl.push_back(tr.outside_equation || rwl <= 0.0 ? std::nullopt : std::optional<double>(rwl));
+          }
+          out.push_back(std::move(lim));
+        }
+    return out;
+  }
+
+  /// A route's job index: the VLI over its picks (Waters et al. 2016; the category rule is named in the result),
+  /// and the CLI as well where the route has few picks.
+  RouteResult review_route(const Route& route, const std::vector<SlotFinding>& findings,
+                           const std::unordered_map<std::string, std::size_t>& finding_of_slot) const {
+    RouteResult out;
+    out.id = route.id;
+    out.name = route.name;
+    std::vector<CompositeItem> items;
+    std::vector<VariableSubtask> subtasks;
+    std::optional<DurationCategory> duration;
+    for (const std::string& id : route.slots) {
+      const SlotFinding& f = findings[finding_of_slot.at(id)];
+      items.push_back(make_composite_item(f.lift.task, f.result, u_));
+      subtasks.push_back(make_variable_subtask(f.lift.task, f.result, u_));
+      duration = duration_of(find_zone(*racks_.at(f.rack_id)));
+    }
+    const VariableResult v = calc_variable_li(subtasks, duration, o_.rounding);
+    out.vli = v.vli;
+    out.vli_rule = std::string(v.category_rule);
+    out.undefined_reason = v.undefined_reason;
+    if (items.size() <= max_tasks_for_cli) out.cli = calc_composite_li(items, duration, o_.rounding).cli;
+    for (std::size_t i = 0; i < items.size(); ++i)
+      out.contributions.push_back({items[i].id, items[i].frequency_per_min, items[i].fili, items[i].stli,
+                                   i < v.contributions.size() ? v.contributions[i] : 0.0});
+    std::stable_sort(out.contributions.begin(), out.contributions.end(),
+                     [](const RouteContribution& a, const RouteContribution& b) { return a.contribution > b.contribution; });
+    return out;
+  }
+
+  static void rank(std::vector<SlotFinding>& findings) {
+    // Worst first: outside the equation, then by LI, then by frequency (exposure).
+    std::stable_sort(findings.begin(), findings.end(), [](const SlotFinding& a, const SlotFinding& b) {
+      if (a.truck_access != b.truck_access) return b.truck_access;
+      const double la = a.result.li.value_or(std::numeric_limits<double>::infinity());
+      const double lb = b.result.li.value_or(std::numeric_limits<double>::infinity());
+      if (la != lb) return la > lb;
+      return a.lift.task.frequency_per_min > b.lift.task.frequency_per_min;
+    });
+  }
+
+  const Store& s_;
+  UnitSystem u_;
+  const ReviewOptions& o_;
+  std::unordered_map<std::string, const Part*> parts_;
+  std::unordered_map<std::string, const Rack*> racks_;
+  std::unordered_map<std::string, const Zone*> zones_;
+  std::vector<WorkPeriod> shift_pattern_;
+  std::vector<Place> hand_places_;
+};
+
+}  // namespace
+
+StoreReview review_store(const Store& store, UnitSystem units, const ReviewOptions& options) {
+  return Reviewer(store, units, options).run();
+}
+
+}  // namespace rackreach
