@@ -4,6 +4,7 @@
 #include <fstream>
 #include <nlohmann/json.hpp>
 #include <set>
+#include <tuple>
 #include <sstream>
 
 #include "engine/io/json_reader.hpp"
@@ -76,7 +77,16 @@ class ProjectLoader {
   explicit ProjectLoader(std::vector<Problem>& problems) : r_(problems), problems_(problems) {}
 
   /// Units used in messages and rules of jobs loaded before the root object is complete.
-  void set_units(UnitSystem u) { units_ = u; }
+  void set_units(UnitSystem u) {
+    units_ = u;
+    store_.set_units(u);
+  }
+
+  /// Takes one element of a root array as the parser completes it.
+  void add_element(std::string_view root_key, const json& j, std::size_t index) {
+    if (root_key == "jobs") add_job(j, index);
+    else store_.add(root_key, j, index);
+  }
 
   /// Validates one element of the jobs array and keeps it if it is valid.
   void add_job(const json& j, std::size_t index) {
@@ -120,7 +130,7 @@ class ProjectLoader {
     if (const json* rp = r_.member(doc, root, "reach_parameters", false))
       load_reach_parameters(*rp, JsonPath(root, "reach_parameters"), p);
 
-    load_store(r_, problems_, doc, p.units, p.store);
+    store_.finish(doc, p.units, p.store);
     // A file holds explicit lift jobs, a store with slots, or both; either may be left out, not both.
     const bool has_slots = doc.contains("slots");
     if (const json* jobs = r_.member(doc, root, "jobs", !has_slots)) {
@@ -361,6 +371,7 @@ class ProjectLoader {
   std::vector<LiftJob> jobs_;
   std::set<std::string> job_ids_;
   std::size_t jobs_seen_ = 0;
+  StoreReader store_{r_, problems_};
 };
 
 }  // namespace
@@ -368,21 +379,28 @@ class ProjectLoader {
 LoadResult load_project_text(std::string_view text) {
   LoadResult out;
   ProjectLoader loader(out.problems);
-  // The parser hands each element of the root's "jobs" array to the loader as soon as it is complete and then
-  // drops it, so the document tree never holds more than one job: a large file is parsed and validated in one
-  // pass, in little memory. Jobs that come before the root's "units" wait until the end.
+  // The parser hands each element of the root's arrays (jobs, zones, racks, parts, slots, routes) to the loader as
+  // soon as it is complete and then drops it, so the document tree never holds more than one element of them: a
+  // large file is parsed and validated in one pass, in little memory (and nlohmann's callback parser, which scans
+  // a kept array at every element's end, stays linear). Elements that come before the root's "units" wait.
   std::string root_key;
-  bool in_jobs = false, jobs_streamed = false;
+  std::string streaming;  // the root array being streamed, or ""
+  bool jobs_streamed = false;
   std::optional<UnitSystem> units;
   std::size_t position = 0;
-  std::vector<std::pair<std::size_t, json>> waiting;
+  std::vector<std::tuple<std::string, std::size_t, json>> waiting;
   auto on_event = [&](int depth, json::parse_event_t ev, json& parsed) {
     using E = json::parse_event_t;
     if (depth == 1) {
-      if (ev == E::key) root_key = parsed.get<std::string>();
-      else if (ev == E::array_start && root_key == "jobs") in_jobs = jobs_streamed = true;
-      else if (ev == E::array_end) in_jobs = false;
-      else if (ev == E::value && root_key == "units" && parsed.is_string() && !units) {
+      if (ev == E::key) {
+        root_key = parsed.get<std::string>();
+      } else if (ev == E::array_start && (root_key == "jobs" || StoreReader::streams(root_key))) {
+        streaming = root_key;
+        position = 0;
+        jobs_streamed = jobs_streamed || root_key == "jobs";
+      } else if (ev == E::array_end) {
+        streaming.clear();
+      } else if (ev == E::value && root_key == "units" && parsed.is_string() && !units) {
         const std::string& u = parsed.get_ref<const std::string&>();
         if (u == "metric" || u == "us") {
           units = u == "metric" ? UnitSystem::metric : UnitSystem::us;
@@ -391,9 +409,9 @@ LoadResult load_project_text(std::string_view text) {
       }
       return true;
     }
-    if (in_jobs && depth == 2 && (ev == E::object_end || ev == E::array_end || ev == E::value)) {
-      if (units) loader.add_job(parsed, position++);
-      else waiting.emplace_back(position++, std::move(parsed));
+    if (!streaming.empty() && depth == 2 && (ev == E::object_end || ev == E::array_end || ev == E::value)) {
+      if (units) loader.add_element(streaming, parsed, position++);
+      else waiting.emplace_back(streaming, position++, std::move(parsed));
       return false;
     }
     return true;
@@ -417,7 +435,7 @@ LoadResult load_project_text(std::string_view text) {
   }
   if (!units && doc.is_object())
     if (auto it = doc.find("units"); it != doc.end() && *it == "us") loader.set_units(UnitSystem::us);
-  for (auto& [index, job] : waiting) loader.add_job(job, index);
+  for (auto& [key, index, element] : waiting) loader.add_element(key, element, index);
   out.project = loader.finish(doc, jobs_streamed);
   return out;
 }

@@ -22,10 +22,30 @@ std::optional<int> parse_clock(const std::string& s) {
   return h * 60 + m;
 }
 
-class StoreLoader {
+}  // namespace
+
+class StoreReader::Impl {
  public:
-  StoreLoader(JsonReader& r, std::vector<Problem>& problems, UnitSystem units)
-      : r_(r), problems_(problems), units_(units), len_(length_unit(units)), mass_(mass_unit(units)) {}
+  Impl(JsonReader& r, std::vector<Problem>& problems) : r_(r), problems_(problems) { set_units(UnitSystem::metric); }
+
+  void set_units(UnitSystem u) {
+    units_ = u;
+    len_ = length_unit(u);
+    mass_ = mass_unit(u);
+  }
+
+  void add(std::string_view key, const json& j, std::size_t index, Store& s) {
+    const JsonPath root;
+    const JsonPath array_path(root, key);
+    const JsonPath p(array_path, index);
+    r_.set_context("");
+    if (key == "zones") load_zone(j, p, s);
+    else if (key == "racks") load_rack(j, p, s);
+    else if (key == "parts") load_part(j, p, s);
+    else if (key == "slots") load_slot(j, p, s);
+    else if (key == "routes") load_route(j, p, s);
+    r_.set_context("");
+  }
 
   void load(const json& doc, Store& s) {
     const JsonPath root;
@@ -35,11 +55,11 @@ class StoreLoader {
       if (r_.object(*j, p, {"kits_per_hour"}))
         s.kits_per_hour = r_.number(*j, p, "kits_per_hour", true, {0.0, 10000.0, true, false, "kits/h"}).value_or(0.0);
     }
-    each(doc, root, "zones", [&](const json& j, const JsonPath& p) { load_zone(j, p, s); });
-    each(doc, root, "racks", [&](const json& j, const JsonPath& p) { load_rack(j, p, s); });
-    each(doc, root, "parts", [&](const json& j, const JsonPath& p) { load_part(j, p, s); });
-    each(doc, root, "slots", [&](const json& j, const JsonPath& p) { load_slot(j, p, s); });
-    each(doc, root, "routes", [&](const json& j, const JsonPath& p) { load_route(j, p, s); });
+    // Arrays the parser handed over element by element are empty here; the others (or a wrong type) are read now.
+    for (const char* key : {"zones", "racks", "parts", "slots", "routes"})
+      if (const json* j = r_.member(doc, root, key, false))
+        if (r_.array(*j, JsonPath(root, key), 0, key))
+          for (std::size_t i = 0; i < j->size(); ++i) add(key, (*j)[i], i, s);
     if (const json* j = r_.member(doc, root, "reference_box", false))
       load_reference_box(*j, JsonPath(root, "reference_box"), s);
     if (const json* j = r_.member(doc, root, "limit_frequencies", false)) {
@@ -61,19 +81,6 @@ class StoreLoader {
   }
 
  private:
-  template <typename F>
-  void each(const json& doc, const JsonPath& root, const char* key, F&& f) {
-    const json* j = r_.member(doc, root, key, false);
-    if (!j) return;
-    const JsonPath path(root, key);
-    if (!r_.array(*j, path, 0, key)) return;
-    for (std::size_t i = 0; i < j->size(); ++i) {
-      r_.set_context("");
-      f((*j)[i], JsonPath(path, i));
-    }
-    r_.set_context("");
-  }
-
   std::optional<double> length(const json& j, const JsonPath& p, const char* key, bool required, double min,
                                bool min_exclusive, double max_cm) {
     const double max = Length{max_cm, UnitSystem::metric}.in_units(units_);
@@ -403,17 +410,32 @@ class StoreLoader {
 
   JsonReader& r_;
   std::vector<Problem>& problems_;
-  UnitSystem units_;
+  UnitSystem units_ = UnitSystem::metric;
   std::string_view len_, mass_;
   std::set<std::string> zone_ids_, rack_ids_, part_ids_, slot_ids_;
   std::vector<std::string> rack_paths_, slot_paths_, route_paths_;
   bool reference_box_given_ = false;
 };
 
-}  // namespace
+StoreReader::StoreReader(JsonReader& r, std::vector<Problem>& problems) : impl_(std::make_unique<Impl>(r, problems)) {}
+StoreReader::~StoreReader() = default;
 
-void load_store(JsonReader& r, std::vector<Problem>& problems, const json& doc, UnitSystem units, Store& store) {
-  StoreLoader(r, problems, units).load(doc, store);
+void StoreReader::set_units(UnitSystem u) { impl_->set_units(u); }
+
+bool StoreReader::streams(std::string_view root_key) {
+  for (const char* k : {"zones", "racks", "parts", "slots", "routes"})
+    if (root_key == k) return true;
+  return false;
+}
+
+void StoreReader::add(std::string_view root_key, const json& element, std::size_t index) {
+  impl_->add(root_key, element, index, store_);
+}
+
+void StoreReader::finish(const json& doc, UnitSystem units, Store& store) {
+  impl_->set_units(units);
+  impl_->load(doc, store_);
+  store = std::move(store_);
 }
 
 }  // namespace rackreach

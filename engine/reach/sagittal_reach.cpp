@@ -148,7 +148,8 @@ HeightZone calc_height_zone(const ReachBody& b, double grip_height_cm, const Rea
   return HeightZone::below_grip_centre;
 }
 
-ReachResult calc_reach(const ReachBody& small, const ReachBody& large, const ReachQuery& q, const ReachParameters& p) {
+ReachResult calc_reach(const ReachBody& small, const ReachBody& large, const ReachQuery& q, const ReachParameters& p,
+                       bool explain) {
   ReachResult r;
   const Eigen::Vector2d grip(q.grip_depth_cm, q.grip_height_cm);
   r.small_height_zone = calc_height_zone(small, q.grip_height_cm, p);
@@ -169,7 +170,7 @@ ReachResult calc_reach(const ReachBody& small, const ReachBody& large, const Rea
                                     small.shoulder_grip_length_cm, distance, sphere_params);
   const std::string from_shoulder =
       below_shoulder ? " in front of the shoulder (below shoulder height the picker bends down to it)" : " from the shoulder";
-  max_reach.message = who(small, ReachWorker::small) + ": the grip is " + cm(distance) + from_shoulder +
+  if (explain) max_reach.message = who(small, ReachWorker::small) + ": the grip is " + cm(distance) + from_shoulder +
                       ", the straight-arm grip reach is " + cm(small.shoulder_grip_length_cm) + ": " +
                       verdict(max_reach);
   std::vector<std::string> comfort_params = sphere_params;
@@ -178,12 +179,12 @@ ReachResult calc_reach(const ReachBody& small, const ReachBody& large, const Rea
   ReachCheck comfort = make_check("comfortable_reach", ReachWorker::small, "shoulder_grip_length", comfortable,
                                   distance, comfort_params);
   comfort.advisory = true;
-  comfort.message = who(small, ReachWorker::small) + ": the grip is " + cm(distance) + from_shoulder +
+  if (explain) comfort.message = who(small, ReachWorker::small) + ": the grip is " + cm(distance) + from_shoulder +
                     ", comfortable reach is " + cm(comfortable) + ": " + verdict(comfort);
   ReachCheck overhead =
       make_check("overhead_reach", ReachWorker::small, "overhead_grip_reach",
                  small.overhead_grip_reach_cm + p.footwear_allowance_cm, q.grip_height_cm, {"footwear_allowance_cm"});
-  overhead.message = who(small, ReachWorker::small) + ": the grip is " + cm(q.grip_height_cm) +
+  if (explain) overhead.message = who(small, ReachWorker::small) + ": the grip is " + cm(q.grip_height_cm) +
                      " above the floor, overhead grip reach with shoes is " + cm(overhead.available_cm) + ": " +
                      verdict(overhead);
   r.small_max_reach_margin_cm = std::min(max_reach.margin_cm, overhead.margin_cm);
@@ -202,7 +203,7 @@ ReachResult calc_reach(const ReachBody& small, const ReachBody& large, const Rea
         make_check("hand_clearance", ReachWorker::large, "hand_breadth", *q.structure_above_grip_cm - q.grip_height_cm,
                    hand_above + p.hand_clearance_allowance_cm,
                    {"hand_above_grip_fraction_of_breadth", "hand_clearance_allowance_cm"});
-    hand.message = who(large, ReachWorker::large) + ": " + cm(hand.available_cm) +
+    if (explain) hand.message = who(large, ReachWorker::large) + ": " + cm(hand.available_cm) +
                    " free above the grip, the hand needs " + cm(hand_above) + " plus " +
                    cm(p.hand_clearance_allowance_cm) + " allowance: " + verdict(hand);
     r.checks.push_back(std::move(hand));
@@ -211,7 +212,7 @@ ReachResult calc_reach(const ReachBody& small, const ReachBody& large, const Rea
     const double head = large.stature_cm + p.footwear_allowance_cm;
     ReachCheck head_check = make_check("head_clearance", ReachWorker::large, "stature", *q.structure_above_picker_cm,
                                        head, {"footwear_allowance_cm"});
-    head_check.message = who(large, ReachWorker::large) + ": the structure over the picker is at " +
+    if (explain) head_check.message = who(large, ReachWorker::large) + ": the structure over the picker is at " +
                          cm(*q.structure_above_picker_cm) + ", stature with shoes is " + cm(head) + ": " +
                          verdict(head_check);
     r.checks.push_back(std::move(head_check));
@@ -220,10 +221,10 @@ ReachResult calc_reach(const ReachBody& small, const ReachBody& large, const Rea
   // The lifting equation's own limits at this point (Waters et al. 1993): HM = 0 beyond H max, VM = 0 beyond V max.
   ReachCheck h_limit =
       make_check("equation_h_limit", std::nullopt, "", rnle_metric.h_max, r.h_cm, {"ankle_to_rack_face_cm"});
-  h_limit.message = "lifting equation: H = " + cm(r.h_cm) + " (ankles to rack face plus grip depth), the limit is " +
+  if (explain) h_limit.message = "lifting equation: H = " + cm(r.h_cm) + " (ankles to rack face plus grip depth), the limit is " +
                     cm(rnle_metric.h_max) + ": " + verdict(h_limit);
   ReachCheck v_limit = make_check("equation_v_limit", std::nullopt, "", rnle_metric.v_max, r.v_cm, {});
-  v_limit.message =
+  if (explain) v_limit.message =
       "lifting equation: V = " + cm(r.v_cm) + ", the limit is " + cm(rnle_metric.v_max) + ": " + verdict(v_limit);
   r.checks.push_back(std::move(h_limit));
   r.checks.push_back(std::move(v_limit));

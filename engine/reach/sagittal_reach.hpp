@@ -153,7 +153,8 @@ Eigen::Vector2d calc_shoulder_pivot(const ReachBody& body, const ReachParameters
 HeightZone calc_height_zone(const ReachBody& body, double grip_height_cm, const ReachParameters& params);
 
 /// Evaluates a grip point for the small and the large worker. Inputs must pass validate_reach_inputs.
+/// `explain` false leaves the checks' messages empty (for searching many places quickly).
 ReachResult calc_reach(const ReachBody& small, const ReachBody& large, const ReachQuery& query,
-                       const ReachParameters& params);
+                       const ReachParameters& params, bool explain = true);
 
 }  // namespace rackreach

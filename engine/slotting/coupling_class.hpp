@@ -21,7 +21,7 @@ inline constexpr double optimal_container_max_height_cm = 30.0;
 
 struct CouplingClass {
   Coupling coupling = Coupling::poor;
-  std::string reason;
+  const char* reason = "";  ///< static text: how the class follows from the part
 };
 
 CouplingClass calc_coupling_class(const Part& part, UnitSystem units);

@@ -6,6 +6,8 @@
 #include <cstdio>
 #include <limits>
 #include <map>
+#include <set>
+#include <tuple>
 #include <unordered_map>
 
 #include "engine/lifting/composite.hpp"
@@ -55,12 +57,15 @@ class Reviewer {
     for (const Rack& r : s.racks) racks_.emplace(r.id, &r);
     for (const Zone& z : s.zones) zones_.emplace(z.id, &z);
     shift_pattern_ = s.shift ? s.shift->work_pattern() : Shift{}.work_pattern();
-    // The hand-pick places of the store, for the remedies and the hand/truck decisions.
+    // The hand-pick places of the store, for the remedies and the hand/truck decisions: one per distinct geometry
+    // (zone, surface height, clear height, shelf depth, position), since every such place gives the same lift.
+    std::set<std::tuple<std::string, double, double, double, int>> seen;
     for (const Rack& r : s.racks)
       for (const Level& l : r.levels)
         if (l.access == LevelAccess::hand)
           for (SlotPosition pos : {SlotPosition::front, SlotPosition::back})
-            hand_places_.push_back({&r, &l, find_zone(r), pos, duration_of(find_zone(r))});
+            if (seen.emplace(r.zone, l.surface_height, l.clear_height, r.shelf_depth, static_cast<int>(pos)).second)
+              hand_places_.push_back({&r, &l, find_zone(r), pos, duration_of(find_zone(r))});
   }
 
   StoreReview run() {
@@ -117,10 +122,12 @@ class Reviewer {
     else d.standing_distance = {Length{ZoneDefaults::standing_distance_cm, UnitSystem::metric}.in_units(u_),
                                 ValueSource::built_in_default};
     const CouplingClass cc = calc_coupling_class(part, u_);
-    d.coupling_reason = cc.reason;
     d.lifts_per_kit = part.pieces_per_kit / part.pieces_per_grasp;
     LiftTask& t = d.task;
-    t.id = slot ? slot->id : place.rack->id + "/" + place.level->id;
+    if (slot) {  // the words only for a slot's own lift, not for the places searched for remedies
+      d.coupling_reason = cc.reason;
+      t.id = slot->id;
+    }
     t.load = part.unit_weight * part.pieces_per_grasp;
     t.frequency_per_min = s_.kits_per_hour * d.lifts_per_kit / 60.0;
     t.coupling = cc.coupling;
@@ -139,7 +146,9 @@ class Reviewer {
     return evaluate_task(d.task, place.duration, u_, o_.rounding);
   }
 
-  std::optional<ReachResult> reach_of(const DerivedLift& d, const Place& place) const {
+  /// The reach result of a lift from a place; `explain` false: no messages and no input check (for searching
+  /// places, whose inputs are as valid as the slot's own: the box fits below the level above).
+  std::optional<ReachResult> reach_of(const DerivedLift& d, const Place& place, bool explain = true) const {
     if (!o_.small || !o_.large) return std::nullopt;
     ReachQuery q;
     q.grip_height_cm = Length{d.task.origin.v, u_}.in_cm();
@@ -147,8 +156,8 @@ class Reviewer {
     q.structure_above_grip_cm = Length{place.level->surface_height + place.level->clear_height, u_}.in_cm();
     ReachParameters p = o_.reach_parameters;
     p.ankle_to_rack_face_cm = Length{d.standing_distance.value, u_}.in_cm();
-    if (!validate_reach_inputs(*o_.small, *o_.large, q, p).empty()) return std::nullopt;
-    return calc_reach(*o_.small, *o_.large, q, p);
+    if (explain && !validate_reach_inputs(*o_.small, *o_.large, q, p).empty()) return std::nullopt;
+    return calc_reach(*o_.small, *o_.large, q, p, explain);
   }
 
   /// The waist zone for remedies: from the small worker's grip-centre height to the large worker's elbow height
@@ -180,7 +189,7 @@ class Reviewer {
       if (waist_only && (d.task.origin.v < lo || d.task.origin.v > hi)) continue;
       const TaskResult r = evaluate(d, pl);
       if (!r.li) continue;
-      if (auto reach = reach_of(d, pl); reach && reach->find_worst_failure()) continue;
+      if (auto reach = reach_of(d, pl, false); reach && reach->find_worst_failure()) continue;
       if (!best.li || *r.li < *best.li) best = {&pl, r.li};
     }
     return best;
