@@ -8,10 +8,10 @@
 
 namespace rackreach::cli {
 
-void print_problems(const std::string& file, const std::vector<Problem>& problems) {
+void print_problems(const std::string& file, const std::vector<Problem>& problems, const char* outcome) {
   for (const Problem& p : problems) std::cerr << format_problem(file, p) << "\n";
-  std::cerr << file << ": " << problems.size() << (problems.size() == 1 ? " problem" : " problems")
-            << "; nothing was assessed\n";
+  std::cerr << file << ": " << problems.size() << (problems.size() == 1 ? " problem" : " problems") << "; " << outcome
+            << "\n";
 }
 
 void add_check_command(CLI::App& app, int& exit_code) {

@@ -17,8 +17,11 @@ void add_assess_command(CLI::App& app, int& exit_code);
 void add_check_command(CLI::App& app, int& exit_code);
 void add_template_command(CLI::App& app, int& exit_code);
 void add_limits_command(CLI::App& app, int& exit_code);
+void add_import_command(CLI::App& app, int& exit_code);
+void add_export_csv_command(CLI::App& app, int& exit_code);
 
 /// Prints every problem to stderr, one per line, naming the file.
-void print_problems(const std::string& file, const std::vector<Problem>& problems);
+void print_problems(const std::string& file, const std::vector<Problem>& problems,
+                    const char* outcome = "nothing was assessed");
 
 }  // namespace rackreach::cli

@@ -26,6 +26,10 @@ LoadResult load_project_text(std::string_view text);
 /// Reads a file and loads it; an unreadable file is a `file_error` problem.
 LoadResult load_project_file(const std::string& path);
 
+/// The project as a project file (format version 1): the inverse of load_project_text. Values the file left to
+/// their defaults stay out, so they keep their defaults when it is read again.
+std::string save_project_text(const Project& project);
+
 /// A starter project in the given units: one job of two tasks, every field shown.
 std::string make_template(UnitSystem units);
 

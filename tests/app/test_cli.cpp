@@ -256,6 +256,32 @@ TEST_CASE("The demo store's review is a golden test", "[cli][store][golden]") {
   CHECK(run_cli("assess " + sample + " --fail-above 1.0").exit_code == 3);
 }
 
+TEST_CASE("CSV round trip through the CLI: export the demo store's parts and slots, import them, same review",
+          "[cli][csv]") {
+  const std::string sample = quote(shared_reference::repo_path("sample_tasks/kitting-store.rackreach.json"));
+  const fs::path dir = fs::temp_directory_path() / ("rackreach-csv-" + std::to_string(::getpid()));
+  fs::create_directories(dir);
+  const std::string parts = quote((dir / "parts.csv").string()), slots = quote((dir / "slots.csv").string());
+  const std::string out = quote((dir / "imported.rackreach.json").string());
+  const Run ex = run_cli("export-csv " + sample + " --parts " + parts + " --slots " + slots);
+  REQUIRE(ex.exit_code == 0);
+  const Run im = run_cli("import " + sample + " --parts " + parts + " --slots " + slots + " --out " + out);
+  INFO(im.err);
+  REQUIRE(im.exit_code == 0);
+  const json a = json::parse(run_cli("assess " + sample + " --format json").out);
+  const json b = json::parse(run_cli("assess " + out + " --format json").out);
+  check_same_json(b["store"], a["store"], "store");
+  // A slot list that names racks the project does not have: exit 1, every problem named, nothing written.
+  const std::string bad_out = quote((dir / "not-written.json").string());
+  const Run bad = run_cli("import " + sample + " --parts " +
+                          quote(shared_reference::repo_path("tests/data/csv/parts_marlow_valley.csv")) + " --slots " +
+                          quote(shared_reference::repo_path("tests/data/csv/slots_marlow_valley.csv")) + " --out " + bad_out);
+  CHECK(bad.exit_code == 1);
+  CHECK_THAT(bad.err, Catch::Matchers::Contains("names no rack of the file"));
+  CHECK_FALSE(fs::exists(dir / "not-written.json"));
+  fs::remove_all(dir);
+}
+
 TEST_CASE("Exit codes: usage 2, --fail-above 3, --version, template round trip", "[cli][exit]") {
   CHECK(run_cli("").exit_code == 2);
   CHECK(run_cli("assess").exit_code == 2);

@@ -3,6 +3,7 @@
 // gives the expected problem code at the expected JSON path.
 
 #include <catch2/catch.hpp>
+#include <filesystem>
 #include <string>
 
 #include "engine/io/assessment_output.hpp"
@@ -129,6 +130,28 @@ TEST_CASE("A store loads: racks, parts, slots, routes; a slot's unknown part nam
   const std::string msg = format_problem("f.json", bad.problems[0]);
   CHECK_THAT(msg, Catch::Matchers::Contains("slot \"S1\""));
   CHECK_THAT(msg, Catch::Matchers::Contains("\"P9\""));
+}
+
+TEST_CASE("Save and load again: the same project, every sample", "[io][save]") {
+  namespace fs = std::filesystem;
+  int count = 0;
+  for (const auto& entry : fs::directory_iterator(shared_reference::repo_path("sample_tasks"))) {
+    if (entry.path().extension() != ".json") continue;
+    ++count;
+    INFO(entry.path().filename().string());
+    const LoadResult first = load_project_file(entry.path().string());
+    REQUIRE(first.project);
+    const std::string saved = save_project_text(*first.project);
+    const LoadResult second = load_project_text(saved);
+    for (const auto& p : second.problems) INFO(format_problem("saved", p));
+    REQUIRE(second.project);
+    // Saving the reloaded project gives the same text, and the same assessment, number for number.
+    CHECK(save_project_text(*second.project) == saved);
+    const auto a1 = assess_project(*first.project, {});
+    const auto a2 = assess_project(*second.project, {});
+    CHECK(write_assessment_json(*first.project, a1, {"x"}) == write_assessment_json(*second.project, a2, {"x"}));
+  }
+  CHECK(count >= 4);
 }
 
 TEST_CASE("The template loads and is valid in both unit systems", "[io][template]") {
