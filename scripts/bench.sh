@@ -4,7 +4,7 @@
 set -euo pipefail
 cd "$(dirname "$0")/.."
 cmake -S . -B build -DCMAKE_BUILD_TYPE=Release >/dev/null
-cmake --build build -j"$(nproc)" --target rackreach bench_rnle make_bench_project
+cmake --build build -j"$(nproc)" --target rackreach bench_rnle make_bench_project make_bench_store
 ./build/bench/bench_rnle --benchmark_counters_tabular=true
 work=$(mktemp -d)
 trap 'rm -rf "$work"' EXIT
@@ -15,3 +15,9 @@ for i in 1 2 3; do
     ./build/app/cli/rackreach assess "$work/jobs-100k.rackreach.json" --format json --out "$work/out.json"
 done
 ls -l "$work/out.json" | awk '{print "output bytes:", $5}'
+./build/bench/make_bench_store "$work/store-100k.rackreach.json" 100000
+ls -l "$work/store-100k.rackreach.json" | awk '{print "store input bytes:", $5}'
+/usr/bin/time -f "parse check (rackreach check): %e s wall, %M KB peak" \
+  ./build/app/cli/rackreach check "$work/store-100k.rackreach.json"
+/usr/bin/time -f "store review (assess --format json): %e s wall, %M KB peak" \
+  ./build/app/cli/rackreach assess "$work/store-100k.rackreach.json" --format json --out "$work/store-out.json"

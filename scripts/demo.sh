@@ -5,4 +5,4 @@ cd "$(dirname "$0")/.."
 bash scripts/install-deps.sh
 cmake -S . -B build -DCMAKE_BUILD_TYPE=Release >/dev/null
 cmake --build build -j"$(nproc)" --target rackreach
-./build/app/cli/rackreach assess sample_tasks/kit-cart-loading.rackreach.json
+./build/app/cli/rackreach assess sample_tasks/kitting-store.rackreach.json
