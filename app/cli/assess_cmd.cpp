@@ -76,15 +76,11 @@ void add_assess_command(CLI::App& app, int& exit_code) {
       ->check(CLI::PositiveNumber);
   cmd->add_option("--out", args->out, "write to this file (atomically) instead of standard output");
   cmd->callback([args, &exit_code] {
-    const LoadResult r = load_project_file(args->file);
-    if (!r.project) {
-      print_problems(args->file, r.problems);
-      exit_code = exit_invalid_input;
-      return;
-    }
+    const std::optional<Project> project = load_or_report(args->file, exit_code);
+    if (!project) return;
     AssessOptions options;
-    if (r.project->has_shelf_geometry()) {
-      LoadedReachSetup reach = load_reach_setup(*r.project, find_data_dir());
+    if (project->has_shelf_geometry()) {
+      LoadedReachSetup reach = load_reach_setup(*project, find_data_dir());
       if (!reach.setup) {
         print_problems(args->file, reach.problems);
         exit_code = exit_invalid_input;
@@ -94,14 +90,14 @@ void add_assess_command(CLI::App& app, int& exit_code) {
     }
     options.rounding = args->rounding == "worksheet" ? RoundingMode::worksheet : RoundingMode::full;
     if (!args->duration_rule.empty()) options.duration_rule = find_duration_rule(args->duration_rule);
-    const ProjectAssessment a = assess_project(*r.project, options);
+    const ProjectAssessment a = assess_project(*project, options);
     const OutputHeader header{args->file};
     std::string text;
-    if (args->format == "json") text = write_assessment_json(*r.project, a, header);
-    else if (args->format == "csv" && a.store) text = write_review_csv(*r.project, *a.store);
-    else if (args->format == "csv") text = write_assessment_csv(*r.project, a, header);
-    else if (args->format == "html") text = write_assessment_html(*r.project, a, header);
-    else text = write_assessment_table(*r.project, a, header);
+    if (args->format == "json") text = write_assessment_json(*project, a, header);
+    else if (args->format == "csv" && a.store) text = write_review_csv(*project, *a.store);
+    else if (args->format == "csv") text = write_assessment_csv(*project, a, header);
+    else if (args->format == "html") text = write_assessment_html(*project, a, header);
+    else text = write_assessment_table(*project, a, header);
     if (args->out.empty()) {
       std::cout << text;
     } else if (auto err = write_file_atomically(args->out, text)) {

@@ -14,6 +14,15 @@ void print_problems(const std::string& file, const std::vector<Problem>& problem
             << "\n";
 }
 
+std::optional<Project> load_or_report(const std::string& file, int& exit_code) {
+  LoadResult r = load_project_file(file);
+  if (!r.project) {
+    print_problems(file, r.problems);
+    exit_code = exit_invalid_input;
+  }
+  return std::move(r.project);
+}
+
 void add_check_command(CLI::App& app, int& exit_code) {
   auto* cmd = app.add_subcommand("check", "Validate a project file: every problem with file, field path, value and rule");
   auto file = std::make_shared<std::string>();

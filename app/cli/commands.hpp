@@ -3,10 +3,12 @@
 // The subcommands of `rackreach`, one file each. Each adds itself to the app and sets `exit_code` when run.
 
 #include <CLI/CLI.hpp>
+#include <optional>
 #include <string>
 #include <vector>
 
 #include "engine/problem.hpp"
+#include "engine/project.hpp"
 
 namespace rackreach::cli {
 
@@ -19,6 +21,9 @@ void add_template_command(CLI::App& app, int& exit_code);
 void add_limits_command(CLI::App& app, int& exit_code);
 void add_import_command(CLI::App& app, int& exit_code);
 void add_export_csv_command(CLI::App& app, int& exit_code);
+
+/// Loads a project file; on problems prints them, sets exit code 1 and returns nothing.
+std::optional<Project> load_or_report(const std::string& file, int& exit_code);
 
 /// Prints every problem to stderr, one per line, naming the file.
 void print_problems(const std::string& file, const std::vector<Problem>& problems,

@@ -28,16 +28,12 @@ void add_import_command(CLI::App& app, int& exit_code) {
       ->check(CLI::IsMember({"metric", "us"}));
   cmd->add_flag("--ignore-unknown-columns", args->ignore_unknown, "skip columns that map to no field (listed)");
   cmd->callback([args, &exit_code] {
-    const LoadResult r = load_project_file(args->project);
-    if (!r.project) {
-      print_problems(args->project, r.problems);
-      exit_code = exit_invalid_input;
-      return;
-    }
+    const std::optional<Project> project = load_or_report(args->project, exit_code);
+    if (!project) return;
     CsvOptions options;
     if (!args->units.empty()) options.units = args->units == "us" ? UnitSystem::us : UnitSystem::metric;
     options.ignore_unknown_columns = args->ignore_unknown;
-    const CsvImport imported = import_store_csv(args->parts, args->slots, r.project->units, options);
+    const CsvImport imported = import_store_csv(args->parts, args->slots, project->units, options);
     for (const Problem& w : imported.warnings) std::cerr << format_problem(w) << "\n";
     if (!imported.ok()) {
       for (const Problem& p : imported.problems) std::cerr << format_problem(p) << "\n";
@@ -46,11 +42,11 @@ void add_import_command(CLI::App& app, int& exit_code) {
       exit_code = exit_invalid_input;
       return;
     }
-    Project project = *r.project;
-    project.store.parts = imported.parts;
-    project.store.slots = imported.slots;
+    Project updated = *project;
+    updated.store.parts = imported.parts;
+    updated.store.slots = imported.slots;
     // The new project must load as it is: the racks, levels and routes must fit the imported slots.
-    const std::string text = save_project_text(project);
+    const std::string text = save_project_text(updated);
     const LoadResult check = load_project_text(text);
     if (!check.project) {
       print_problems(args->out + " (as it would be written)", check.problems, "nothing was written");
@@ -82,21 +78,17 @@ void add_export_csv_command(CLI::App& app, int& exit_code) {
   cmd->add_option("--parts", args->parts, "part master CSV to write")->required();
   cmd->add_option("--slots", args->slots, "slot list CSV to write")->required();
   cmd->callback([args, &exit_code] {
-    const LoadResult r = load_project_file(args->project);
-    if (!r.project) {
-      print_problems(args->project, r.problems);
-      exit_code = exit_invalid_input;
-      return;
-    }
-    for (auto [file, text] : {std::pair{args->parts, write_parts_csv(r.project->store.parts, r.project->units)},
-                              std::pair{args->slots, write_slots_csv(r.project->store.slots, r.project->units)}})
+    const std::optional<Project> project = load_or_report(args->project, exit_code);
+    if (!project) return;
+    for (auto [file, text] : {std::pair{args->parts, write_parts_csv(project->store.parts, project->units)},
+                              std::pair{args->slots, write_slots_csv(project->store.slots, project->units)}})
       if (auto err = write_file_atomically(file, text)) {
         std::cerr << file << ": " << *err << "\n";
         exit_code = exit_invalid_input;
         return;
       }
-    std::cout << args->parts << ", " << args->slots << ": " << r.project->store.parts.size() << " parts and "
-              << r.project->store.slots.size() << " slots written\n";
+    std::cout << args->parts << ", " << args->slots << ": " << project->store.parts.size() << " parts and "
+              << project->store.slots.size() << " slots written\n";
   });
 }
 

@@ -25,35 +25,31 @@ void add_limits_command(CLI::App& app, int& exit_code) {
   cmd->add_option("--format", args->format, "table or json")->check(CLI::IsMember({"table", "json"}))->capture_default_str();
   cmd->add_option("--out", args->out, "write to this file (atomically) instead of standard output");
   cmd->callback([args, &exit_code] {
-    const LoadResult r = load_project_file(args->file);
-    if (!r.project) {
-      print_problems(args->file, r.problems);
-      exit_code = exit_invalid_input;
-      return;
-    }
-    if (r.project->store.racks.empty()) {
+    const std::optional<Project> project = load_or_report(args->file, exit_code);
+    if (!project) return;
+    if (project->store.racks.empty()) {
       std::cerr << args->file << ": racks: the file has no racks, so there are no level limits [missing_key]\n";
       exit_code = exit_invalid_input;
       return;
     }
     // Level limits need no slots; review a copy of the store with its slots as they are (possibly none).
     ReviewOptions ro;
-    ro.duration_rule = r.project->duration_rule;
-    const StoreReview review = review_store(r.project->store, r.project->units, ro);
+    ro.duration_rule = project->duration_rule;
+    const StoreReview review = review_store(project->store, project->units, ro);
     std::string text;
     if (args->format == "json") {
       JsonWriter w(text);
       w.begin_object().field("rackreach_output", 1).field("engine_version", engine_version);
-      w.field("input", args->file).field("mass_unit", mass_unit(r.project->units));
-      w.field("length_unit", length_unit(r.project->units)).field("caution", caution_text);
+      w.field("input", args->file).field("mass_unit", mass_unit(project->units));
+      w.field("length_unit", length_unit(project->units)).field("caution", caution_text);
       w.key("store");
-      write_review_json(w, *r.project, review, ro.rounding);
+      write_review_json(w, *project, review, ro.rounding);
       w.end_object();
       w.finish();
       text += "\n";
     } else {
       text = "Rackreach " + std::string(engine_version) + ": level limits of " + args->file + "\n" +
-             write_level_limits_table(*r.project, review) + "\nCaution: " + caution_text + "\n";
+             write_level_limits_table(*project, review) + "\nCaution: " + caution_text + "\n";
     }
     if (args->out.empty()) std::cout << text;
     else if (auto err = write_file_atomically(args->out, text)) {

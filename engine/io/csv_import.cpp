@@ -1,5 +1,6 @@
 // SPDX-License-Identifier: MIT
 #include "engine/io/csv_import.hpp"
+#include "engine/io/json_reader.hpp"
 
 #include <csv.h>
 
@@ -250,18 +251,6 @@ std::string cell_value(std::string_view raw) {
   if (s.size() >= 2 && s[0] == '\'' && std::string_view("=+-@\t\r").find(s[1]) != std::string_view::npos)
     s.erase(s.begin());
   return s;
-}
-
-std::size_t edit_distance(std::string_view a, std::string_view b) {
-  std::vector<std::size_t> prev(b.size() + 1), cur(b.size() + 1);
-  for (std::size_t j = 0; j <= b.size(); ++j) prev[j] = j;
-  for (std::size_t i = 1; i <= a.size(); ++i) {
-    cur[0] = i;
-    for (std::size_t j = 1; j <= b.size(); ++j)
-      cur[j] = std::min({prev[j] + 1, cur[j - 1] + 1, prev[j - 1] + (a[i - 1] == b[j - 1] ? 0 : 1)});
-    std::swap(prev, cur);
-  }
-  return prev[b.size()];
 }
 
 std::vector<std::string_view> split_names(std::string_view names) {
@@ -657,7 +646,7 @@ class Table {
             break;
           }
         }
-        const std::size_t d = std::min(edit_distance(name, n), edit_distance(base, n));
+        const std::size_t d = std::min(calc_edit_distance(name, n), calc_edit_distance(base, n));
         if (d < best) best = d, suggestion = std::string(s.name);
       }
     }

@@ -22,19 +22,6 @@ const char* type_word(const nlohmann::json& j) {
   }
 }
 
-/// Edit distance, to suggest the key a typo meant.
-std::size_t edit_distance(std::string_view a, std::string_view b) {
-  std::vector<std::size_t> prev(b.size() + 1), cur(b.size() + 1);
-  for (std::size_t j = 0; j <= b.size(); ++j) prev[j] = j;
-  for (std::size_t i = 1; i <= a.size(); ++i) {
-    cur[0] = i;
-    for (std::size_t j = 1; j <= b.size(); ++j)
-      cur[j] = std::min({prev[j] + 1, cur[j - 1] + 1, prev[j - 1] + (a[i - 1] == b[j - 1] ? 0 : 1)});
-    std::swap(prev, cur);
-  }
-  return prev[b.size()];
-}
-
 std::string fmt_num(double x) {
   char buf[32];
   std::snprintf(buf, sizeof buf, "%g", x);
@@ -57,6 +44,18 @@ std::string describe(const NumberRule& r) {
 }
 
 }  // namespace
+
+std::size_t calc_edit_distance(std::string_view a, std::string_view b) {
+  std::vector<std::size_t> prev(b.size() + 1), cur(b.size() + 1);
+  for (std::size_t j = 0; j <= b.size(); ++j) prev[j] = j;
+  for (std::size_t i = 1; i <= a.size(); ++i) {
+    cur[0] = i;
+    for (std::size_t j = 1; j <= b.size(); ++j)
+      cur[j] = std::min({prev[j] + 1, cur[j - 1] + 1, prev[j - 1] + (a[i - 1] == b[j - 1] ? 0 : 1)});
+    std::swap(prev, cur);
+  }
+  return prev[b.size()];
+}
 
 std::string json_excerpt(const nlohmann::json& j) {
   std::string s = j.dump();
@@ -82,7 +81,7 @@ bool JsonReader::object(const nlohmann::json& j, const JsonPath& path, std::init
       for (std::string_view a : allowed) {
         list += (list.empty() ? "" : ", ") + std::string(a);
         const bool prefix = it.key().rfind(a, 0) == 0 || std::string_view(a).rfind(it.key(), 0) == 0;
-        if (suggestion.empty() && (edit_distance(a, it.key()) <= 2 || (prefix && it.key().size() > 3)))
+        if (suggestion.empty() && (calc_edit_distance(a, it.key()) <= 2 || (prefix && it.key().size() > 3)))
           suggestion = std::string(a);
       }
       std::string rule = "unknown key";

@@ -56,6 +56,9 @@ class JsonReader {
   std::string context_;
 };
 
+/// Levenshtein distance between two names, to suggest the key or column a typo meant.
+std::size_t calc_edit_distance(std::string_view a, std::string_view b);
+
 /// Short JSON text of a value for messages (long strings and containers are cut).
 std::string json_excerpt(const nlohmann::json& j);
 
