@@ -1,0 +1,52 @@
+// SPDX-License-Identifier: MIT
+// rackreach-gui [PROJECT]
+// rackreach-gui --screenshot OUT.png [--select SLOT] PROJECT   (renders offscreen and exits)
+
+#include <QApplication>
+#include <QMessageBox>
+
+#include <cstdio>
+#include <cstring>
+#include <string>
+
+#include "app/gui/main_window.hpp"
+#include "app/gui/screenshot.hpp"
+
+int main(int argc, char** argv) {
+  QString screenshot, select, project;
+  for (int i = 1; i < argc; ++i) {
+    const std::string a = argv[i];
+    if (a == "--screenshot" && i + 1 < argc) screenshot = QString::fromLocal8Bit(argv[++i]);
+    else if (a == "--select" && i + 1 < argc) select = QString::fromLocal8Bit(argv[++i]);
+    else if (a == "--help" || a == "-h") {
+      std::puts("usage: rackreach-gui [PROJECT]\n"
+                "       rackreach-gui --screenshot OUT.png [--select SLOT] PROJECT");
+      return 0;
+    } else if (!a.empty() && a[0] == '-' && a.rfind("-platform", 0) != 0) {
+      std::fprintf(stderr, "rackreach-gui: unknown option %s\n", a.c_str());
+      return 2;
+    } else if (a.rfind("-platform", 0) != 0) project = QString::fromLocal8Bit(argv[i]);
+  }
+  if (!screenshot.isEmpty() && project.isEmpty()) {
+    std::fputs("rackreach-gui: --screenshot needs a PROJECT file\n", stderr);
+    return 2;
+  }
+  // Pictures are made without a display.
+  if (!screenshot.isEmpty() && qEnvironmentVariableIsEmpty("QT_QPA_PLATFORM")) qputenv("QT_QPA_PLATFORM", "offscreen");
+  QApplication app(argc, argv);
+  QApplication::setApplicationName("rackreach-gui");
+  if (!screenshot.isEmpty()) {
+    const QString err = rackreach::gui::render_main_window(project, select, screenshot);
+    if (!err.isEmpty()) {
+      std::fprintf(stderr, "%s\n", err.toLocal8Bit().constData());
+      return 1;
+    }
+    return 0;
+  }
+  rackreach::gui::MainWindow w;
+  w.show();
+  if (!project.isEmpty())
+    if (const QStringList p = w.open_file(project); !p.isEmpty())
+      QMessageBox::warning(&w, QObject::tr("The file was not opened"), p.join('\n'));
+  return app.exec();
+}

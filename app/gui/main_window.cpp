@@ -1,0 +1,582 @@
+// SPDX-License-Identifier: MIT
+#include "app/gui/main_window.hpp"
+
+#include <QAction>
+#include <QApplication>
+#include <QCloseEvent>
+#include <QComboBox>
+#include <QFileDialog>
+#include <QFileInfo>
+#include <QHBoxLayout>
+#include <QHeaderView>
+#include <QInputDialog>
+#include <QLabel>
+#include <QListWidget>
+#include <QMenuBar>
+#include <QMessageBox>
+#include <QScrollArea>
+#include <QSettings>
+#include <QSplitter>
+#include <QStatusBar>
+#include <QTabWidget>
+#include <QTableView>
+#include <QVBoxLayout>
+
+#include <set>
+
+#include "app/gui/edit_commands.hpp"
+#include "app/gui/findings_model.hpp"
+#include "app/gui/format.hpp"
+#include "app/gui/inspector_view.hpp"
+#include "app/gui/rack_view.hpp"
+#include "app/gui/section_view.hpp"
+#include "app/gui/store_tables.hpp"
+#include "app/gui/task_form.hpp"
+#include "engine/caution.hpp"
+#include "engine/io/atomic_file.hpp"
+#include "engine/io/csv_import.hpp"
+#include "engine/io/review_output.hpp"
+
+namespace rackreach::gui {
+namespace {
+constexpr int max_recent = 8;
+const char* const settings_org = "Rackreach";
+const char* const settings_app = "rackreach-gui";
+
+QTableView* make_table(QAbstractItemModel* m) {
+  auto* v = new QTableView;
+  v->setModel(m);
+  v->setSelectionBehavior(QAbstractItemView::SelectRows);
+  v->setSelectionMode(QAbstractItemView::SingleSelection);
+  v->setAlternatingRowColors(true);
+  v->verticalHeader()->setDefaultSectionSize(22);
+  v->verticalHeader()->hide();
+  v->horizontalHeader()->setStretchLastSection(true);
+  return v;
+}
+}  // namespace
+
+MainWindow::MainWindow(bool remember, QWidget* parent) : QMainWindow(parent), remember_(remember) {
+  setObjectName("main_window");
+  rack_list_ = new QListWidget;
+  rack_list_->setAccessibleName(tr("Racks"));
+  rack_list_->setMaximumWidth(130);
+  rack_view_ = new RackView(model_);
+  section_ = new SectionView(model_);
+  inspector_ = new InspectorView(model_);
+
+  auto* rack_box = new QWidget;
+  auto* rack_box_layout = new QVBoxLayout(rack_box);
+  rack_box_layout->setContentsMargins(0, 0, 0, 0);
+  auto* racks_label = new QLabel(tr("&Racks"));
+  racks_label->setBuddy(rack_list_);
+  rack_box_layout->addWidget(racks_label);
+  rack_box_layout->addWidget(rack_list_, 1);
+  summary_ = new QLabel;
+  summary_->setWordWrap(true);
+  rack_box_layout->addWidget(summary_);
+
+  auto* right = new QSplitter(Qt::Vertical);
+  right->addWidget(section_);
+  right->addWidget(inspector_);
+  right->setStretchFactor(0, 0);
+  right->setStretchFactor(1, 1);
+  right->setSizes({260, 340});
+
+  auto* top = new QSplitter(Qt::Horizontal);
+  top->addWidget(rack_box);
+  top->addWidget(rack_view_);
+  top->addWidget(right);
+  top->setStretchFactor(1, 1);
+  top->setSizes({110, 800, 370});
+
+  // Findings with their filters.
+  findings_ = new FindingsModel(model_, this);
+  filter_ = new FindingsFilter(this);
+  filter_->setSourceModel(findings_);
+  filter_->setSortRole(FindingsModel::sort_role);
+  findings_view_ = make_table(filter_);
+  findings_view_->setSortingEnabled(true);
+  findings_view_->sortByColumn(FindingsModel::rank, Qt::AscendingOrder);
+  findings_view_->setAccessibleName(tr("Ranked findings"));
+  auto* findings_page = new QWidget;
+  auto* fl = new QVBoxLayout(findings_page);
+  fl->setContentsMargins(4, 4, 4, 4);
+  auto* filters = new QHBoxLayout;
+  auto add_filter = [&](const QString& label, QComboBox*& box) {
+    box = new QComboBox;
+    box->setSizeAdjustPolicy(QComboBox::AdjustToContents);
+    auto* l = new QLabel(label);
+    l->setBuddy(box);
+    filters->addWidget(l);
+    filters->addWidget(box);
+    connect(box, &QComboBox::currentIndexChanged, this, &MainWindow::apply_filter);
+  };
+  add_filter(tr("&Band:"), band_filter_);
+  add_filter(tr("&Family:"), family_filter_);
+  add_filter(tr("Rac&k:"), rack_filter_);
+  add_filter(tr("Re&medy:"), remedy_filter_);
+  filters->addStretch(1);
+  fl->addLayout(filters);
+  fl->addWidget(findings_view_);
+
+  parts_ = new PartsTableModel(model_, this);
+  slots_ = new SlotsTableModel(model_, this);
+  parts_view_ = make_table(parts_);
+  slots_view_ = make_table(slots_);
+  slots_view_->setDragEnabled(true);
+  slots_view_->setAcceptDrops(true);
+  slots_view_->setDropIndicatorShown(true);
+  slots_view_->setDragDropMode(QAbstractItemView::DragDrop);
+  slots_view_->setDefaultDropAction(Qt::MoveAction);
+  parts_view_->setAccessibleName(tr("Parts"));
+  slots_view_->setAccessibleName(tr("Slots (drag a row onto another to swap their parts)"));
+  task_form_ = new TaskForm(model_);
+
+  tabs_ = new QTabWidget;
+  tabs_->addTab(findings_page, tr("Findings"));
+  tabs_->addTab(parts_view_, tr("Parts"));
+  tabs_->addTab(slots_view_, tr("Slots"));
+  auto* task_scroll = new QScrollArea;  // the form is taller than the tab at 1280x800
+  task_scroll->setWidget(task_form_);
+  task_scroll->setWidgetResizable(true);
+  tabs_->addTab(task_scroll, tr("Lift task"));
+
+  auto* main_split = new QSplitter(Qt::Vertical);
+  main_split->addWidget(top);
+  main_split->addWidget(tabs_);
+  main_split->setStretchFactor(0, 3);
+  main_split->setStretchFactor(1, 2);
+  main_split->setSizes({500, 220});
+  tabs_->setMinimumHeight(150);
+  main_split->setObjectName("main_split");
+
+  caution_ = new QLabel(tr("Caution: %1").arg(QString::fromUtf8(caution_text)));
+  caution_->setWordWrap(true);
+  caution_->setObjectName("caution");
+  caution_->setStyleSheet("QLabel#caution { background: #FFF8DC; border-top: 1px solid #B8A000; padding: 3px; }");
+  caution_->setAccessibleName(tr("Caution"));
+
+  auto* central = new QWidget;
+  auto* cl = new QVBoxLayout(central);
+  cl->setContentsMargins(0, 0, 0, 0);
+  cl->setSpacing(0);
+  cl->addWidget(main_split, 1);
+  cl->addWidget(caution_);
+  setCentralWidget(central);
+
+  connect(rack_list_, &QListWidget::currentRowChanged, rack_view_, &RackView::set_rack);
+  connect(rack_view_, &RackView::slot_selected, this, [this](std::size_t s) { select_slot(s); });
+  connect(findings_view_->selectionModel(), &QItemSelectionModel::currentRowChanged, this,
+          [this](const QModelIndex& current) {
+            if (!current.isValid()) return;
+            const QVariant v = current.siblingAtColumn(0).data(FindingsModel::slot_index_role);
+            if (v.isValid()) select_slot(static_cast<std::size_t>(v.toULongLong()));
+          });
+  connect(slots_view_->selectionModel(), &QItemSelectionModel::currentRowChanged, this,
+          [this](const QModelIndex& current) {
+            if (current.isValid()) select_slot(static_cast<std::size_t>(current.row()));
+          });
+  for (auto* t : {parts_, static_cast<PartsTableModel*>(nullptr)}) {
+    if (!t) continue;
+    connect(t, &PartsTableModel::edit_refused, this, [this](const QString& why) { statusBar()->showMessage(why, 8000); });
+  }
+  connect(slots_, &SlotsTableModel::edit_refused, this, [this](const QString& why) { statusBar()->showMessage(why, 8000); });
+  connect(&model_, &ProjectModel::changed, this, &MainWindow::refresh_lists);
+  connect(&model_, &ProjectModel::file_changed, this, &MainWindow::refresh_title);
+
+  build_menus();
+  refresh_lists();
+  refresh_title();
+  statusBar()->showMessage(tr("Open a project file (Ctrl+O) to assess its store."));
+  resize(1280, 800);
+  if (remember_) {
+    QSettings s(settings_org, settings_app);
+    restoreGeometry(s.value("window/geometry").toByteArray());
+    restoreState(s.value("window/state").toByteArray());
+    main_split->restoreState(s.value("window/main_split").toByteArray());
+  }
+}
+
+void MainWindow::build_menus() {
+  QMenu* file = menuBar()->addMenu(tr("&File"));
+  file->addAction(tr("&New metric project"), QKeySequence::New, this, [this] {
+    if (confirm_discard()) model_.new_project(UnitSystem::metric);
+  });
+  file->addAction(tr("New &US project"), this, [this] {
+    if (confirm_discard()) model_.new_project(UnitSystem::us);
+  });
+  file->addAction(tr("&Open..."), QKeySequence::Open, this, &MainWindow::on_open);
+  recent_menu_ = file->addMenu(tr("Open &recent"));
+  file->addAction(tr("&Save"), QKeySequence::Save, this, &MainWindow::on_save);
+  file->addAction(tr("Save &as..."), QKeySequence::SaveAs, this, &MainWindow::on_save_as);
+  file->addSeparator();
+  file->addAction(tr("&Import parts and slots from CSV..."), this, &MainWindow::on_import_csv);
+  file->addAction(tr("Export findings as &CSV..."), this, [this] { on_export(false); });
+  file->addAction(tr("Export findings as &HTML..."), this, [this] { on_export(true); });
+  file->addSeparator();
+  file->addAction(tr("&Quit"), QKeySequence::Quit, this, &QWidget::close);
+
+  QMenu* edit = menuBar()->addMenu(tr("&Edit"));
+  QAction* undo = model_.undo_stack()->createUndoAction(this, tr("&Undo"));
+  undo->setShortcut(QKeySequence::Undo);
+  QAction* redo = model_.undo_stack()->createRedoAction(this, tr("&Redo"));
+  redo->setShortcut(QKeySequence::Redo);
+  edit->addAction(undo);
+  edit->addAction(redo);
+  edit->addSeparator();
+  edit->addAction(tr("&Move the selected slot's part to slot..."), QKeySequence(tr("Ctrl+M")), this,
+                  &MainWindow::on_move_part);
+  edit->addAction(tr("Add a &slot..."), this, &MainWindow::on_add_slot);
+  edit->addAction(tr("Remove the selected slot"), this, &MainWindow::on_remove_slot);
+  edit->addAction(tr("Add a &part..."), this, &MainWindow::on_add_part);
+  edit->addAction(tr("Remove the selected part"), this, &MainWindow::on_remove_part);
+
+  QMenu* view = menuBar()->addMenu(tr("&View"));
+  view->addAction(tr("Rack &drawing"), QKeySequence(tr("Ctrl+1")), this, [this] { rack_view_->setFocus(); });
+  view->addAction(tr("&Findings"), QKeySequence(tr("Ctrl+2")), this, [this] {
+    tabs_->setCurrentIndex(0);
+    findings_view_->setFocus();
+  });
+  view->addAction(tr("&Inspector"), QKeySequence(tr("Ctrl+3")), this, [this] { inspector_->setFocus(); });
+  view->addAction(tr("&Lift task form"), QKeySequence(tr("Ctrl+4")), this, [this] {
+    tabs_->setCurrentIndex(tabs_->count() - 1);
+    task_form_->setFocus();
+  });
+  update_recent_menu();
+}
+
+QStringList MainWindow::open_file(const QString& path) {
+  const std::vector<Problem> problems = model_.open(path);
+  QStringList out;
+  for (const Problem& p : problems) out << q(format_problem(path.toStdString(), p));
+  if (!out.isEmpty()) return out;
+  add_recent(path);
+  selected_.reset();
+  select_slot(std::nullopt);
+  if (rack_list_->count() > 0) rack_list_->setCurrentRow(0);
+  for (const Problem& p : model_.assess_problems()) out << q(format_problem(path.toStdString(), p));
+  statusBar()->showMessage(out.isEmpty() ? tr("Opened %1").arg(path) : tr("Opened; the reach checks could not be "
+                                                                          "made: %1").arg(out.join("; ")));
+  return {};
+}
+
+void MainWindow::select_slot(std::optional<std::size_t> slot_index) {
+  selected_ = slot_index;
+  rack_view_->set_selected_slot(slot_index);
+  section_->set_selected_slot(slot_index);
+  inspector_->set_selected_slot(slot_index);
+  if (rack_list_->currentRow() != rack_view_->rack()) {
+    const QSignalBlocker b(rack_list_);
+    rack_list_->setCurrentRow(rack_view_->rack());
+  }
+  if (!slot_index) return;
+  const int row = findings_->find_row(*slot_index);
+  if (row >= 0) {
+    const QModelIndex proxy = filter_->mapFromSource(findings_->index(row, 0));
+    if (proxy.isValid() && findings_view_->currentIndex().row() != proxy.row()) {
+      const QSignalBlocker b(findings_view_->selectionModel());
+      findings_view_->selectionModel()->setCurrentIndex(
+          proxy, QItemSelectionModel::ClearAndSelect | QItemSelectionModel::Rows);
+      findings_view_->scrollTo(proxy);
+    }
+  }
+  const QSignalBlocker b(slots_view_->selectionModel());
+  slots_view_->selectionModel()->setCurrentIndex(slots_->index(static_cast<int>(*slot_index), 0),
+                                                 QItemSelectionModel::ClearAndSelect | QItemSelectionModel::Rows);
+}
+
+void MainWindow::refresh_lists() {
+  const Store& store = model_.project().store;
+  {
+    const QSignalBlocker b(rack_list_);
+    const int cur = rack_list_->currentRow();
+    rack_list_->clear();
+    for (const Rack& r : store.racks)
+      rack_list_->addItem(tr("%1 (%2 levels)").arg(q(r.id)).arg(r.levels.size()));
+    rack_list_->setCurrentRow(cur >= 0 && cur < rack_list_->count() ? cur : (rack_list_->count() ? 0 : -1));
+    rack_view_->set_rack(rack_list_->currentRow());
+  }
+  auto refill = [](QComboBox* box, const std::set<QString>& items) {
+    const QSignalBlocker b(box);
+    const QString cur = box->currentData().toString();
+    box->clear();
+    box->addItem(tr("any"), QString());
+    for (const QString& s : items) box->addItem(s, s);
+    const int i = box->findData(cur);
+    box->setCurrentIndex(i >= 0 ? i : 0);
+  };
+  std::set<QString> families, racks, remedies;
+  const QStringList bands = {"within limit", "elevated", "high", "very high", "outside equation", "truck level"};
+  if (const StoreReview* r = model_.review())
+    for (const SlotFinding& f : r->findings) {
+      families.insert(q(f.family));
+      racks.insert(q(f.rack_id));
+      for (const Remedy& m : f.remedies) remedies.insert(QString::fromUtf8(remedy_name(m.kind)));
+    }
+  {
+    const QSignalBlocker b(band_filter_);
+    if (band_filter_->count() == 0) {
+      band_filter_->addItem(tr("any"), QString());
+      for (const QString& s : bands) band_filter_->addItem(s, s);
+    }
+  }
+  refill(family_filter_, families);
+  refill(rack_filter_, racks);
+  refill(remedy_filter_, remedies);
+  apply_filter();
+  // One line of figures under the rack list.
+  if (const StoreReview* r = model_.review()) {
+    int over = 0, outside = 0;
+    for (const SlotFinding& f : r->findings) {
+      if (f.truck_access) continue;
+      if (f.band == RiskBand::outside_equation) ++outside;
+      else if (f.band != RiskBand::within_limit) ++over;
+    }
+    summary_->setText(tr("%1 slots: %2 above LI 1, %3 outside the equation").arg(r->findings.size()).arg(over).arg(outside));
+  } else {
+    summary_->setText(model_.project().jobs.empty() ? tr("No store.") : tr("%1 lift jobs, no store.").arg(model_.project().jobs.size()));
+  }
+  if (selected_) select_slot(selected_);
+}
+
+void MainWindow::apply_filter() {
+  filter_->set_filter(band_filter_->currentData().toString(), family_filter_->currentData().toString(),
+                      rack_filter_->currentData().toString(), remedy_filter_->currentData().toString());
+}
+
+void MainWindow::refresh_title() {
+  const QString name = model_.file_path().isEmpty() ? tr("untitled") : QFileInfo(model_.file_path()).fileName();
+  setWindowTitle(tr("%1%2 - Rackreach").arg(name, model_.modified() ? "*" : ""));
+  setWindowModified(model_.modified());
+}
+
+void MainWindow::add_recent(const QString& path) {
+  if (!remember_) return;
+  QSettings s(settings_org, settings_app);
+  QStringList recent = s.value("recent_files").toStringList();
+  const QString abs = QFileInfo(path).absoluteFilePath();
+  recent.removeAll(abs);
+  recent.prepend(abs);
+  while (recent.size() > max_recent) recent.removeLast();
+  s.setValue("recent_files", recent);
+  update_recent_menu();
+}
+
+void MainWindow::update_recent_menu() {
+  recent_menu_->clear();
+  const QStringList recent = remember_ ? QSettings(settings_org, settings_app).value("recent_files").toStringList()
+                                       : QStringList();
+  for (const QString& f : recent)
+    recent_menu_->addAction(f, this, [this, f] {
+      if (!confirm_discard()) return;
+      if (const QStringList p = open_file(f); !p.isEmpty()) show_problems(tr("The file was not opened"), p);
+    });
+  recent_menu_->setEnabled(!recent.isEmpty());
+}
+
+bool MainWindow::confirm_discard() {
+  if (!model_.modified()) return true;
+  const auto answer = QMessageBox::question(this, tr("Unsaved changes"),
+                                            tr("The project has changes that are not saved. Save them first?"),
+                                            QMessageBox::Save | QMessageBox::Discard | QMessageBox::Cancel);
+  if (answer == QMessageBox::Save) return on_save();
+  return answer == QMessageBox::Discard;
+}
+
+void MainWindow::closeEvent(QCloseEvent* e) {
+  if (!confirm_discard()) {
+    e->ignore();
+    return;
+  }
+  if (remember_) {
+    QSettings s(settings_org, settings_app);
+    s.setValue("window/geometry", saveGeometry());
+    s.setValue("window/state", saveState());
+    if (auto* split = findChild<QSplitter*>("main_split")) s.setValue("window/main_split", split->saveState());
+  }
+  e->accept();
+}
+
+void MainWindow::show_problems(const QString& title, const QStringList& lines) {
+  QMessageBox box(QMessageBox::Warning, title, title, QMessageBox::Ok, this);
+  box.setInformativeText(lines.mid(0, 12).join('\n') + (lines.size() > 12 ? tr("\n... and %1 more").arg(lines.size() - 12) : ""));
+  box.setDetailedText(lines.join('\n'));
+  box.exec();
+}
+
+void MainWindow::on_open() {
+  if (!confirm_discard()) return;
+  const QString path = QFileDialog::getOpenFileName(this, tr("Open project"), {},
+                                                    tr("Rackreach projects (*.rackreach.json *.json)"));
+  if (path.isEmpty()) return;
+  if (const QStringList p = open_file(path); !p.isEmpty()) show_problems(tr("The file was not opened"), p);
+}
+
+std::optional<QString> MainWindow::save_to(const QString& path) {
+  if (auto err = model_.save_as(path)) {
+    const QString why = tr("Not saved to %1: %2. The file there, if any, is unchanged.").arg(path, q(*err));
+    statusBar()->showMessage(why);
+    return why;
+  }
+  add_recent(path);
+  statusBar()->showMessage(tr("Saved %1").arg(path), 5000);
+  return std::nullopt;
+}
+
+bool MainWindow::on_save() {
+  if (model_.file_path().isEmpty()) return on_save_as();
+  if (auto why = save_to(model_.file_path())) {
+    QMessageBox::warning(this, tr("Not saved"), *why);
+    return false;
+  }
+  return true;
+}
+
+bool MainWindow::on_save_as() {
+  QString path = QFileDialog::getSaveFileName(this, tr("Save project as"), model_.file_path(),
+                                              tr("Rackreach projects (*.rackreach.json)"));
+  if (path.isEmpty()) return false;
+  if (!path.endsWith(".json")) path += ".rackreach.json";
+  if (auto why = save_to(path)) {
+    QMessageBox::warning(this, tr("Not saved"), *why);
+    return false;
+  }
+  return true;
+}
+
+void MainWindow::on_import_csv() {
+  const QString parts = QFileDialog::getOpenFileName(this, tr("Part master (CSV)"), {}, tr("CSV (*.csv)"));
+  if (parts.isEmpty()) return;
+  const QString slots = QFileDialog::getOpenFileName(this, tr("Slot list (CSV)"), QFileInfo(parts).absolutePath(),
+                                                     tr("CSV (*.csv)"));
+  if (slots.isEmpty()) return;
+  CsvOptions options;
+  options.units = model_.units();
+  CsvImport r = import_store_csv(parts.toStdString(), slots.toStdString(), model_.units(), options);
+  if (!r.ok()) {
+    QStringList lines;
+    for (const Problem& p : r.problems) lines << q(format_problem(p));
+    show_problems(tr("Nothing was imported"), lines);
+    return;
+  }
+  for (const Slot& s : r.slots) {
+    const Rack* rack = model_.project().store.find_rack(s.rack);
+    if (!rack || !model_.project().store.find_level(*rack, s.level)) {
+      show_problems(tr("Nothing was imported"),
+                    {tr("slot %1: rack %2 level %3 is not in the project; add the racks first").arg(q(s.id), q(s.rack),
+                                                                                                  q(s.level))});
+      return;
+    }
+  }
+  model_.undo_stack()->push(new ReplaceStoreItemsCommand(model_, std::move(r.parts), std::move(r.slots),
+                                                         tr("Import parts and slots from CSV")));
+}
+
+void MainWindow::on_export(bool html) {
+  if (!model_.review()) {
+    QMessageBox::information(this, tr("Nothing to export"), tr("The project has no store, so there are no findings."));
+    return;
+  }
+  const QString path = QFileDialog::getSaveFileName(this, html ? tr("Export findings (HTML)") : tr("Export findings (CSV)"),
+                                                    {}, html ? tr("HTML (*.html)") : tr("CSV (*.csv)"));
+  if (path.isEmpty()) return;
+  const std::string name = model_.file_path().isEmpty() ? "untitled" : QFileInfo(model_.file_path()).fileName().toStdString();
+  const std::string text = html ? write_review_html(model_.project(), *model_.review(), name)
+                                : write_review_csv(model_.project(), *model_.review());
+  if (auto err = write_file_atomically(path.toStdString(), text))
+    QMessageBox::warning(this, tr("Not exported"), tr("%1: %2").arg(path, q(*err)));
+  else statusBar()->showMessage(tr("Exported %1").arg(path), 5000);
+}
+
+void MainWindow::on_move_part() {
+  if (!selected_) {
+    statusBar()->showMessage(tr("Select a slot first."), 5000);
+    return;
+  }
+  const auto& slots = model_.project().store.slots;
+  QStringList ids;
+  for (const Slot& s : slots) ids << q(s.id) + " (" + q(s.part) + ")";
+  bool ok = false;
+  const QString choice = QInputDialog::getItem(this, tr("Move part"),
+                                               tr("Move part %1 to slot (the parts swap):").arg(q(slots[*selected_].part)),
+                                               ids, 0, false, &ok);
+  if (!ok) return;
+  slots_->swap_parts(*selected_, static_cast<std::size_t>(ids.indexOf(choice)));
+}
+
+void MainWindow::on_add_slot() {
+  const Store& store = model_.project().store;
+  if (store.racks.empty() || store.parts.empty()) {
+    statusBar()->showMessage(tr("A slot needs a rack and a part."), 5000);
+    return;
+  }
+  bool ok = false;
+  const QString id = QInputDialog::getText(this, tr("Add slot"), tr("Slot id:"), QLineEdit::Normal, {}, &ok);
+  if (!ok) return;
+  Slot s;
+  s.id = id.trimmed().toStdString();
+  s.part = store.parts.front().id;
+  s.rack = store.racks.front().id;
+  s.level = store.racks.front().levels.empty() ? "" : store.racks.front().levels.front().id;
+  // The first free place of the first rack.
+  for (const Rack& r : store.racks)
+    for (const Level& l : r.levels)
+      for (int b = 1; b <= r.bays; ++b)
+        for (SlotPosition p : {SlotPosition::front, SlotPosition::back}) {
+          Slot t = s;
+          t.rack = r.id, t.level = l.id, t.bay = b, t.position = p;
+          if (model_.validate_slot(t, std::nullopt).empty()) {
+            model_.undo_stack()->push(new InsertSlotCommand(model_, store.slots.size(), t, false,
+                                                            tr("Add slot %1").arg(q(t.id))));
+            select_slot(store.slots.size() - 1);
+            return;
+          }
+        }
+  statusBar()->showMessage(tr("Not added: %1").arg(q(model_.validate_slot(s, std::nullopt))), 8000);
+}
+
+void MainWindow::on_remove_slot() {
+  if (!selected_) return;
+  const Slot s = model_.project().store.slots.at(*selected_);
+  const std::size_t i = *selected_;
+  select_slot(std::nullopt);
+  model_.undo_stack()->push(new InsertSlotCommand(model_, i, s, true, tr("Remove slot %1").arg(q(s.id))));
+}
+
+void MainWindow::on_add_part() {
+  bool ok = false;
+  const QString id = QInputDialog::getText(this, tr("Add part"), tr("Part id:"), QLineEdit::Normal, {}, &ok);
+  if (!ok) return;
+  Part p;
+  p.id = id.trimmed().toStdString();
+  p.family = "new";
+  p.unit_weight = 1.0;
+  p.box = {model_.units() == UnitSystem::metric ? 20.0 : 8.0, model_.units() == UnitSystem::metric ? 20.0 : 8.0,
+           model_.units() == UnitSystem::metric ? 10.0 : 4.0};
+  if (const std::string why = model_.validate_part(p, std::nullopt); !why.empty()) {
+    statusBar()->showMessage(tr("Not added: %1").arg(q(why)), 8000);
+    return;
+  }
+  model_.undo_stack()->push(new InsertPartCommand(model_, model_.project().store.parts.size(), p, false,
+                                                  tr("Add part %1").arg(q(p.id))));
+  tabs_->setCurrentWidget(parts_view_);
+}
+
+void MainWindow::on_remove_part() {
+  const QModelIndex i = parts_view_->currentIndex();
+  if (!i.isValid()) {
+    statusBar()->showMessage(tr("Select a part in the Parts table first."), 5000);
+    return;
+  }
+  const Part p = model_.project().store.parts.at(static_cast<std::size_t>(i.row()));
+  for (const Slot& s : model_.project().store.slots)
+    if (s.part == p.id) {
+      statusBar()->showMessage(tr("Part %1 is in slot %2: move it out first.").arg(q(p.id), q(s.id)), 8000);
+      return;
+    }
+  model_.undo_stack()->push(new InsertPartCommand(model_, static_cast<std::size_t>(i.row()), p, true,
+                                                  tr("Remove part %1").arg(q(p.id))));
+}
+
+}  // namespace rackreach::gui

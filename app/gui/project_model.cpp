@@ -1,0 +1,241 @@
+// SPDX-License-Identifier: MIT
+#include "app/gui/project_model.hpp"
+
+#include <algorithm>
+#include <cmath>
+#include <set>
+
+#include "anthropometry/data_dir.hpp"
+#include "anthropometry/reach_setup.hpp"
+#include "engine/io/atomic_file.hpp"
+#include "engine/io/project_file.hpp"
+
+namespace rackreach::gui {
+
+ProjectModel::ProjectModel(QObject* parent) : QObject(parent) {
+  connect(&undo_, &QUndoStack::cleanChanged, this, &ProjectModel::file_changed);
+  reassess();
+}
+
+std::vector<Problem> ProjectModel::open(const QString& path) {
+  LoadResult r = load_project_file(path.toStdString());
+  if (!r.project) return r.problems;
+  return set_project(std::move(*r.project), path);
+}
+
+std::vector<Problem> ProjectModel::set_project(Project project, const QString& path) {
+  project_ = std::move(project);
+  path_ = path;
+  undo_.clear();
+  load_reach();
+  reassess();
+  Q_EMIT file_changed();
+  return {};
+}
+
+void ProjectModel::new_project(UnitSystem units) {
+  Project p;
+  p.units = units;
+  set_project(std::move(p));
+}
+
+std::string ProjectModel::project_text() const { return save_project_text(project_); }
+
+std::optional<std::string> ProjectModel::save_as(const QString& path) {
+  if (auto err = write_file_atomically(path.toStdString(), project_text())) return err;
+  path_ = path;
+  undo_.setClean();
+  Q_EMIT file_changed();
+  return std::nullopt;
+}
+
+// The same as `rackreach assess`: a reach setup only where some task or slot has shelf geometry.
+void ProjectModel::load_reach() {
+  reach_.reset();
+  assess_problems_.clear();
+  if (!project_.has_shelf_geometry()) return;
+  LoadedReachSetup r = load_reach_setup(project_, find_data_dir());
+  reach_ = std::move(r.setup);
+  assess_problems_ = std::move(r.problems);
+}
+
+void ProjectModel::reassess() {
+  if (!reach_ && assess_problems_.empty() && project_.has_shelf_geometry()) load_reach();
+  AssessOptions options;
+  options.reach = reach_;
+  assessment_ = assess_project(project_, options);
+  finding_of_slot_.assign(project_.store.slots.size(), -1);
+  if (assessment_.store) {
+    const auto& f = assessment_.store->findings;
+    for (std::size_t i = 0; i < f.size(); ++i)
+      if (f[i].slot_index < finding_of_slot_.size()) finding_of_slot_[f[i].slot_index] = static_cast<int>(i);
+  }
+  Q_EMIT changed();
+}
+
+const SlotFinding* ProjectModel::find_finding(std::size_t slot_index) const {
+  if (!assessment_.store || slot_index >= finding_of_slot_.size() || finding_of_slot_[slot_index] < 0) return nullptr;
+  return &assessment_.store->findings[static_cast<std::size_t>(finding_of_slot_[slot_index])];
+}
+
+std::optional<std::size_t> ProjectModel::find_slot(const std::string& slot_id) const {
+  const auto& s = project_.store.slots;
+  for (std::size_t i = 0; i < s.size(); ++i)
+    if (s[i].id == slot_id) return i;
+  return std::nullopt;
+}
+
+namespace {
+double to_units(double cm, UnitSystem u) { return Length{cm, UnitSystem::metric}.in_units(u); }
+}  // namespace
+
+WorkerHeights ProjectModel::worker_heights(const ReachBody& body) const {
+  const double shoe = reach_ ? reach_->parameters.footwear_allowance_cm : ReachParameters{}.footwear_allowance_cm;
+  const UnitSystem u = project_.units;
+  return {body.label,
+          to_units(body.grip_centre_height_cm + shoe, u),
+          to_units(body.elbow_height_cm + shoe, u),
+          to_units(body.acromial_height_cm + shoe, u),
+          to_units(body.overhead_grip_reach_cm + shoe, u),
+          to_units(body.stature_cm + shoe, u)};
+}
+
+std::optional<SectionGeometry> ProjectModel::section_geometry(const SlotFinding& f) const {
+  const Store& store = project_.store;
+  const Rack* rack = store.find_rack(f.rack_id);
+  if (!rack) return std::nullopt;
+  const Level* level = store.find_level(*rack, f.level_id);
+  const Part* part = store.find_part(f.part_id);
+  if (!level || !part) return std::nullopt;
+  SectionGeometry g;
+  g.shelf_surface = level->surface_height;
+  g.shelf_top = level->surface_height + level->clear_height;
+  g.shelf_depth = rack->shelf_depth;
+  g.box_depth = part->box.depth;
+  g.box_height = part->box.height;
+  const double centre = f.lift.hands_in_shelf;
+  g.box_front = std::max(0.0, centre - part->box.depth / 2.0);
+  g.grip_x = centre;
+  g.grip_z = f.lift.task.origin.v;
+  g.ankles_x = -f.lift.standing_distance.value;
+  g.h_limit_x = g.ankles_x + find_constants(project_.units).h_max;
+  if (reach_) {
+    ReachParameters p = reach_->parameters;
+    p.ankle_to_rack_face_cm = Length{f.lift.standing_distance.value, project_.units}.in_cm();
+    const Eigen::Vector2d pivot = calc_shoulder_pivot(reach_->small, p);
+    const UnitSystem u = project_.units;
+    g.pivot_x = to_units(pivot.x(), u);
+    g.pivot_z = to_units(pivot.y(), u);
+    g.max_reach = to_units(reach_->small.shoulder_grip_length_cm, u);
+    g.comfortable_reach = g.max_reach * p.comfortable_reach_fraction;
+    g.worker = reach_->small.label;
+  }
+  return g;
+}
+
+void ProjectModel::replace_part(std::size_t index, Part part) {
+  if (index >= project_.store.parts.size()) return;
+  const std::string old_id = project_.store.parts[index].id;
+  if (old_id != part.id)  // a renamed part keeps its slots
+    for (Slot& s : project_.store.slots)
+      if (s.part == old_id) s.part = part.id;
+  project_.store.parts[index] = std::move(part);
+  reassess();
+}
+
+void ProjectModel::replace_slot(std::size_t index, Slot slot) {
+  if (index >= project_.store.slots.size()) return;
+  project_.store.slots[index] = std::move(slot);
+  reassess();
+}
+
+void ProjectModel::insert_slot(std::size_t index, Slot slot, const std::vector<Route>* routes) {
+  auto& s = project_.store.slots;
+  if (routes) project_.store.routes = *routes;
+  s.insert(s.begin() + static_cast<std::ptrdiff_t>(std::min(index, s.size())), std::move(slot));
+  reassess();
+}
+
+void ProjectModel::remove_slot(std::size_t index) {
+  auto& s = project_.store.slots;
+  if (index >= s.size()) return;
+  const std::string id = s[index].id;
+  s.erase(s.begin() + static_cast<std::ptrdiff_t>(index));
+  for (Route& r : project_.store.routes) std::erase(r.slots, id);
+  reassess();
+}
+
+void ProjectModel::insert_part(std::size_t index, Part part) {
+  auto& p = project_.store.parts;
+  p.insert(p.begin() + static_cast<std::ptrdiff_t>(std::min(index, p.size())), std::move(part));
+  reassess();
+}
+
+void ProjectModel::remove_part(std::size_t index) {
+  auto& p = project_.store.parts;
+  if (index >= p.size()) return;
+  p.erase(p.begin() + static_cast<std::ptrdiff_t>(index));
+  reassess();
+}
+
+void ProjectModel::set_parts_and_slots(std::vector<Part> parts, std::vector<Slot> slots) {
+  project_.store.parts = std::move(parts);
+  project_.store.slots = std::move(slots);
+  if (!reach_) load_reach();  // a store without shelves before the import needs its workers now
+  reassess();
+}
+
+void ProjectModel::replace_job(std::size_t index, LiftJob job) {
+  if (index >= project_.jobs.size()) return;
+  project_.jobs[index] = std::move(job);
+  reassess();
+}
+
+void ProjectModel::insert_job(std::size_t index, LiftJob job) {
+  auto& j = project_.jobs;
+  j.insert(j.begin() + static_cast<std::ptrdiff_t>(std::min(index, j.size())), std::move(job));
+  reassess();
+}
+
+void ProjectModel::remove_job(std::size_t index) {
+  auto& j = project_.jobs;
+  if (index >= j.size()) return;
+  j.erase(j.begin() + static_cast<std::ptrdiff_t>(index));
+  reassess();
+}
+
+std::string ProjectModel::validate_slot(const Slot& slot, std::optional<std::size_t> replacing) const {
+  const Store& s = project_.store;
+  if (slot.id.empty()) return "a slot needs an id";
+  for (std::size_t i = 0; i < s.slots.size(); ++i)
+    if (s.slots[i].id == slot.id && (!replacing || *replacing != i)) return "slot id \"" + slot.id + "\" is taken";
+  if (!s.find_part(slot.part)) return "there is no part \"" + slot.part + "\"";
+  const Rack* rack = s.find_rack(slot.rack);
+  if (!rack) return "there is no rack \"" + slot.rack + "\"";
+  if (!s.find_level(*rack, slot.level)) return "rack " + rack->id + " has no level \"" + slot.level + "\"";
+  if (slot.bay < 1 || slot.bay > rack->bays)
+    return "rack " + rack->id + " has bays 1 to " + std::to_string(rack->bays) + " (it is " +
+           std::to_string(slot.bay) + ")";
+  for (std::size_t i = 0; i < s.slots.size(); ++i) {
+    const Slot& o = s.slots[i];
+    if ((!replacing || *replacing != i) && o.rack == slot.rack && o.level == slot.level && o.bay == slot.bay &&
+        o.position == slot.position)
+      return "that place is held by slot " + o.id;
+  }
+  return {};
+}
+
+std::string ProjectModel::validate_part(const Part& part, std::optional<std::size_t> replacing) const {
+  const Store& s = project_.store;
+  if (part.id.empty()) return "a part needs an id";
+  for (std::size_t i = 0; i < s.parts.size(); ++i)
+    if (s.parts[i].id == part.id && (!replacing || *replacing != i)) return "part id \"" + part.id + "\" is taken";
+  const std::string m(mass_unit(project_.units)), l(length_unit(project_.units));
+  if (!(part.unit_weight > 0.0) || !std::isfinite(part.unit_weight)) return "unit weight must be above 0 " + m;
+  if (!(part.box.width > 0.0) || !(part.box.depth > 0.0) || !(part.box.height > 0.0))
+    return "box width, depth and height must be above 0 " + l;
+  if (!(part.pieces_per_kit > 0.0) || !(part.pieces_per_grasp > 0.0)) return "pieces per kit and per grasp must be above 0";
+  return {};
+}
+
+}  // namespace rackreach::gui

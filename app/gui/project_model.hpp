@@ -1,0 +1,113 @@
+// SPDX-License-Identifier: MIT
+#pragma once
+// The desktop app's one project model: it holds the Project, its reach setup and its assessment, runs
+// assess_project() (the same call as `rackreach assess`) after every change, and emits changed(). Widgets read
+// from it and edit it only through undoable commands (edit_commands.hpp); they compute nothing themselves.
+
+#include <QObject>
+#include <QString>
+#include <QUndoStack>
+
+#include <optional>
+#include <string>
+#include <vector>
+
+#include "engine/assess.hpp"
+#include "engine/problem.hpp"
+#include "engine/project.hpp"
+
+namespace rackreach::gui {
+
+/// Where the drawing of a slot's section puts things, in the project's length unit (x from the rack face into
+/// the rack, z above the floor).
+struct SectionGeometry {
+  double shelf_surface = 0.0, shelf_top = 0.0, shelf_depth = 0.0;
+  double box_front = 0.0, box_depth = 0.0, box_height = 0.0;
+  double grip_x = 0.0, grip_z = 0.0;
+  double ankles_x = 0.0;                  ///< negative: in front of the face
+  double pivot_x = 0.0, pivot_z = 0.0;    ///< the small worker's shoulder pivot
+  double max_reach = 0.0, comfortable_reach = 0.0;
+  double h_limit_x = 0.0;                 ///< where H reaches the equation's limit (63 cm, 25 in)
+  std::string worker;                     ///< who the arc is for
+};
+
+/// The heights of one worker's reach zones, with footwear, in the project's length unit.
+struct WorkerHeights {
+  std::string label;
+  double grip_centre = 0.0, elbow = 0.0, shoulder = 0.0, overhead_reach = 0.0, stature = 0.0;
+};
+
+class ProjectModel : public QObject {
+  Q_OBJECT
+
+ public:
+  explicit ProjectModel(QObject* parent = nullptr);
+
+  /// Loads a project file; on failure the current project stays and the problems are returned.
+  std::vector<Problem> open(const QString& path);
+  /// Replaces the project (e.g. from a template or a test); resets undo history and the file name.
+  std::vector<Problem> set_project(Project project, const QString& path = {});
+  void new_project(UnitSystem units);
+
+  /// The project as project-file text (save_project_text, the inverse of the loader).
+  std::string project_text() const;
+  /// Writes the project atomically; on failure the old file is untouched and the reason is returned.
+  std::optional<std::string> save_as(const QString& path);
+
+  const Project& project() const { return project_; }
+  const ProjectAssessment& assessment() const { return assessment_; }
+  const StoreReview* review() const { return assessment_.store ? &*assessment_.store : nullptr; }
+  const std::optional<ReachSetup>& reach() const { return reach_; }
+  /// Problems of the last assessment's inputs (e.g. the workforce table could not be read).
+  const std::vector<Problem>& assess_problems() const { return assess_problems_; }
+  UnitSystem units() const { return project_.units; }
+  QString file_path() const { return path_; }
+  bool modified() const { return !undo_.isClean(); }
+  QUndoStack* undo_stack() { return &undo_; }
+
+  /// The finding of a slot (index into Store::slots), or nullptr.
+  const SlotFinding* find_finding(std::size_t slot_index) const;
+  /// The index of the slot with this id, if any.
+  std::optional<std::size_t> find_slot(const std::string& slot_id) const;
+
+  WorkerHeights worker_heights(const ReachBody& body) const;
+  std::optional<SectionGeometry> section_geometry(const SlotFinding& finding) const;
+
+  // Edits. Called by the undo commands only (they keep the history); each reassesses and emits changed().
+  void replace_part(std::size_t index, Part part);
+  void replace_slot(std::size_t index, Slot slot);
+  /// `routes` set: the store's routes are put back as given (undoing a removal).
+  void insert_slot(std::size_t index, Slot slot, const std::vector<Route>* routes = nullptr);
+  void remove_slot(std::size_t index);
+  void insert_part(std::size_t index, Part part);
+  void remove_part(std::size_t index);
+  void set_parts_and_slots(std::vector<Part> parts, std::vector<Slot> slots);
+  void replace_job(std::size_t index, LiftJob job);
+  void insert_job(std::size_t index, LiftJob job);
+  void remove_job(std::size_t index);
+
+  /// Checks a slot against the store: its rack, level, bay and part exist and its id is unique; "" when it is fine.
+  std::string validate_slot(const Slot& slot, std::optional<std::size_t> replacing) const;
+  /// Checks a part: id unique and present, weight and box positive; "" when it is fine.
+  std::string validate_part(const Part& part, std::optional<std::size_t> replacing) const;
+
+  /// Runs the assessment again and emits changed(); the edits call it.
+  void reassess();
+
+ Q_SIGNALS:
+  void changed();
+  void file_changed();  ///< the file name or the modified state changed
+
+ private:
+  void load_reach();
+
+  Project project_;
+  QString path_;
+  std::optional<ReachSetup> reach_;
+  std::vector<Problem> assess_problems_;
+  ProjectAssessment assessment_;
+  std::vector<int> finding_of_slot_;  ///< slot index -> finding index, -1 where none
+  QUndoStack undo_;
+};
+
+}  // namespace rackreach::gui
