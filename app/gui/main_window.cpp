@@ -347,7 +347,7 @@ void MainWindow::apply_filter() {
 
 void MainWindow::refresh_title() {
   const QString name = model_.file_path().isEmpty() ? tr("untitled") : QFileInfo(model_.file_path()).fileName();
-  setWindowTitle(tr("%1%2 - Rackreach").arg(name, model_.modified() ? "*" : ""));
+  setWindowTitle(tr("%1[*] - Rackreach").arg(name));
   setWindowModified(model_.modified());
 }
 
