@@ -178,21 +178,41 @@ class Reviewer {
     std::optional<double> li;
   };
 
-  /// The hand place with the lowest LI for a part (front and back of every hand level), optionally only those
-  /// whose origin V lies in the waist zone.
-  Alternative best_hand_place(const Part& part, bool waist_only) const {
-    Alternative best;
+  struct BestPlaces {
+    Alternative any;    ///< the lowest LI of all hand places
+    Alternative waist;  ///< the lowest LI of those whose origin V lies in the waist zone
+  };
+
+  /// The hand places with the lowest LI for a part (front and back of every hand level), found once per part and
+  /// kept: the remedies of its slot and its hand/truck decision both use them.
+  const BestPlaces& best_hand_places(const Part& part) const {
+    if (auto it = best_cache_.find(&part); it != best_cache_.end()) return it->second;
+    BestPlaces best;
     const auto [lo, hi] = waist_zone();
-    for (const Place& pl : hand_places_) {
+    for (std::size_t i = 0; i < hand_places_.size(); ++i) {
+      const Place& pl = hand_places_[i];
       if (part.box.height > pl.level->clear_height) continue;
       const DerivedLift d = derive(part, pl, nullptr);
-      if (waist_only && (d.task.origin.v < lo || d.task.origin.v > hi)) continue;
       const TaskResult r = evaluate(d, pl);
       if (!r.li) continue;
-      if (auto reach = reach_of(d, pl, false); reach && reach->find_worst_failure()) continue;
-      if (!best.li || *r.li < *best.li) best = {&pl, r.li};
+      if (!reach_passes(d, pl, i)) continue;
+      if (!best.any.li || *r.li < *best.any.li) best.any = {&pl, r.li};
+      const bool in_waist = d.task.origin.v >= lo && d.task.origin.v <= hi;
+      if (in_waist && (!best.waist.li || *r.li < *best.waist.li)) best.waist = {&pl, r.li};
     }
-    return best;
+    return best_cache_.emplace(&part, best).first->second;
+  }
+
+  /// Whether a lift from a place meets every reach limit. The answer depends only on the place, the grip height
+  /// and the hands' depth, so it is kept per such triple (boxes of the same size share it).
+  bool reach_passes(const DerivedLift& d, const Place& place, std::size_t place_index) const {
+    if (!o_.small || !o_.large) return true;
+    const auto key = std::make_tuple(place_index, d.grip_height, d.hands_in_shelf);
+    if (auto it = reach_cache_.find(key); it != reach_cache_.end()) return it->second;
+    const auto reach = reach_of(d, place, false);
+    const bool ok = !reach || !reach->find_worst_failure();
+    reach_cache_.emplace(key, ok);
+    return ok;
   }
 
   static std::string place_name(const Place& p) {
@@ -266,7 +286,7 @@ class Reviewer {
     const auto [lo, hi] = waist_zone();
     const double v = f.lift.task.origin.v;
     if (v < lo || v > hi) {
-      const Alternative alt = best_hand_place(part, true);
+      const Alternative& alt = best_hand_places(part).waist;
       if (alt.li && (!r.li || *alt.li < *r.li - 1e-9))
         f.remedies.push_back({RemedyKind::move_to_waist_zone,
                               "V " + num(v) + " " + len + " is outside the waist zone (" + num(lo) + "-" + num(hi) +
@@ -294,7 +314,7 @@ class Reviewer {
       }
     }
     // No hand place of the store takes the part within the limit: truck level, and for the worst, a mechanical aid.
-    const Alternative best = best_hand_place(part, false);
+    const Alternative& best = best_hand_places(part).any;
     const bool no_hand_place = !best.li || *best.li > o_.bands.elevated_above;
     if (no_hand_place)
       f.remedies.push_back({RemedyKind::truck_level_only,
@@ -328,7 +348,7 @@ class Reviewer {
       PartDecision d;
       d.part_id = p.id;
       d.family = p.family;
-      const Alternative best = best_hand_place(p, false);
+      const Alternative& best = best_hand_places(p).any;
       d.best_hand_li = best.li;
       if (best.place) d.best_hand_slot = place_name(*best.place);
       if (p.truck_only) {
@@ -434,6 +454,8 @@ class Reviewer {
   std::unordered_map<std::string, const Zone*> zones_;
   std::vector<WorkPeriod> shift_pattern_;
   std::vector<Place> hand_places_;
+  mutable std::unordered_map<const Part*, BestPlaces> best_cache_;
+  mutable std::map<std::tuple<std::size_t, double, double>, bool> reach_cache_;
 };
 
 }  // namespace
