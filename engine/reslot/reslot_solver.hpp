@@ -54,6 +54,11 @@
 //    (they cannot be in a better solution) and a branch and bound on "part stays / part moves" with the same Lagrangian
 //    bound at every node closes it. The result says which of the three proved it (`CertificateKind`), and when the node
 //    limit stopped the search.
+//  - Networks of 200,000 arcs or more: the simplex's work grows with the parts it holds, so most parts are first
+//    settled on their best arc at cell prices estimated from every 8th part (or from the previous multiplier's
+//    solve), the simplex solves the others, and every settled part is checked against the potentials found: a
+//    part whose arc is not its cheapest at those prices is released and the rest solved again. The end state meets
+//    complementary slackness on every arc of the whole network, so it is the same optimum, with its certificate.
 //  - Within a cell, the parts the flow sends there keep their current slot when it is in the cell (it always is
 //    free for them: a slot had one part), the others take the free slots in ascending slot index, in ascending
 //    part index. Same input, same output: LEMON's simplex is deterministic and nothing here depends on addresses.
