@@ -68,6 +68,26 @@ class Reviewer {
               hand_places_.push_back({&r, &l, find_zone(r), pos, duration_of(find_zone(r))});
   }
 
+  Placement placement(const Part& part, const Slot& at) const {
+    Placement out;
+    const Rack& rack = *racks_.at(at.rack);
+    const Level& level = *s_.find_level(rack, at.level);
+    out.fits = part.box.height <= level.clear_height && part.box.depth <= rack.shelf_depth;
+    out.truck_access = level.access == LevelAccess::truck;
+    const Place place{&rack, &level, find_zone(rack), at.position, duration_of(find_zone(rack))};
+    const DerivedLift d = derive(part, place, nullptr);
+    out.frequency_per_min = d.task.frequency_per_min;
+    if (out.truck_access) return out;
+    out.li = evaluate(d, place).li;
+    if (const auto reach = reach_of(d, place, false)) out.reach_ok = !reach->find_worst_failure();
+    return out;
+  }
+
+  bool is_hand_part(const Part& part) const {
+    const Alternative& best = best_hand_places(part).any;
+    return !part.truck_only && best.li && *best.li <= o_.bands.elevated_above;
+  }
+
   StoreReview run() {
     StoreReview out;
     out.shift_duration = calc_duration(shift_pattern_, o_.duration_rule);
@@ -463,5 +483,18 @@ class Reviewer {
 StoreReview review_store(const Store& store, UnitSystem units, const ReviewOptions& options) {
   return Reviewer(store, units, options).run();
 }
+
+class PlacementEvaluator::Impl {
+ public:
+  Impl(const Store& s, UnitSystem u, const ReviewOptions& o) : options_(o), reviewer_(s, u, options_) {}
+  ReviewOptions options_;
+  Reviewer reviewer_;
+};
+
+PlacementEvaluator::PlacementEvaluator(const Store& store, UnitSystem units, const ReviewOptions& options)
+    : impl_(std::make_unique<Impl>(store, units, options)) {}
+PlacementEvaluator::~PlacementEvaluator() = default;
+Placement PlacementEvaluator::evaluate(const Part& part, const Slot& at) const { return impl_->reviewer_.placement(part, at); }
+bool PlacementEvaluator::is_hand_part(const Part& part) const { return impl_->reviewer_.is_hand_part(part); }
 
 }  // namespace rackreach

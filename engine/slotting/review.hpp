@@ -12,6 +12,7 @@
 //   F = kits per hour x pieces per kit / pieces per grasp / 60; load = unit weight x pieces per grasp;
 //   duration from the shift (or the zone's lifting pattern) by the Applications Manual's recovery rule.
 
+#include <memory>
 #include <optional>
 #include <string>
 #include <vector>
@@ -127,5 +128,30 @@ struct ReviewOptions {
 };
 
 StoreReview review_store(const Store& store, UnitSystem units, const ReviewOptions& options);
+
+/// A part placed at a slot's place (rack, level, position), derived and evaluated exactly as the review does.
+struct Placement {
+  bool fits = true;            ///< the box fits the level's clear height and the shelf depth
+  bool truck_access = false;   ///< a lift-truck level: no manual lift
+  bool reach_ok = true;        ///< every reach limit met (when the review has a workforce)
+  std::optional<double> li;    ///< empty on truck levels and outside the equation
+  double frequency_per_min = 0.0;
+};
+
+/// Evaluates parts at places of one store without reviewing the whole store (the re-slotting costs).
+class PlacementEvaluator {
+ public:
+  PlacementEvaluator(const Store& store, UnitSystem units, const ReviewOptions& options);
+  ~PlacementEvaluator();
+  PlacementEvaluator(const PlacementEvaluator&) = delete;
+  PlacementEvaluator& operator=(const PlacementEvaluator&) = delete;
+  Placement evaluate(const Part& part, const Slot& at) const;
+  /// The review's hand/truck decision for a part.
+  bool is_hand_part(const Part& part) const;
+
+ private:
+  class Impl;
+  std::unique_ptr<Impl> impl_;
+};
 
 }  // namespace rackreach
