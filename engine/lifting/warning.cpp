@@ -3,6 +3,8 @@
 
 #include <cstdio>
 
+#include "engine/lifting/limits_of_application.hpp"
+
 namespace rackreach {
 namespace {
 
@@ -61,14 +63,19 @@ std::string describe_warning(const Warning& w, UnitSystem units) {
     case WarningKind::restricted_space: return std::string("lifting in a restricted work space") + limits;
     case WarningKind::unstable_load: return std::string("unstable object") + limits;
     case WarningKind::wheelbarrow_or_shovel: return std::string("wheelbarrow or shovel") + limits;
-    case WarningKind::high_speed: return std::string("high-speed lifting (faster than about 76 cm/s)") + limits;
+    case WarningKind::high_speed:
+      return fmt("high-speed lifting (faster than about %.0f cm/s)", max_lift_speed_cm_per_s) + limits;
     case WarningKind::carry_push_share:
       return fmt("carrying, pushing or pulling is %.0f%% of the work (the equation assumes at most about %.0f%%)",
                  w.value * 100.0, w.limit * 100.0);
     case WarningKind::floor_friction:
       return fmt("foot-floor coefficient of friction %.2f is below %.1f", w.value, w.limit) + limits;
-    case WarningKind::temperature: return fmt("temperature %.1f C is outside 19-26 C", w.value) + limits;
-    case WarningKind::humidity: return fmt("relative humidity %.0f%% is outside 35-50%%", w.value) + limits;
+    case WarningKind::temperature:
+      return fmt("temperature %.1f C is outside ", w.value) + fmt("%.0f-", min_temperature_c) +
+             fmt("%.0f C", max_temperature_c) + limits;
+    case WarningKind::humidity:
+      return fmt("relative humidity %.0f%% is outside ", w.value) + fmt("%.0f-", min_humidity_pct) +
+             fmt("%.0f%%", max_humidity_pct) + limits;
     case WarningKind::duration_over_8h:
       return "lifting lasts more than 8 h: outside the equation (Table 5 stops at 8 h); FIRWL and FILI are shown, "
              "RWL and LI are not";

@@ -8,7 +8,7 @@ CouplingClass calc_coupling_class(const Part& part, UnitSystem units) {
   const double width_cm = Length{part.box.width, units}.in_cm();
   const double height_cm = Length{part.box.height, units}.in_cm();
   if (width_cm > optimal_container_max_frontal_length_cm || height_cm > optimal_container_max_height_cm)
-    return {Coupling::poor, "container larger than optimal (frontal length over 40 cm or height over 30 cm): poor"};
+    return {Coupling::poor, "container larger than optimal (frontal length or height above Table 6's optimal container): poor"};
   if (!part.handhold) return {Coupling::poor, "no handhold given: the more stressful class, poor"};
   const Handhold& h = *part.handhold;
   if (h.kind != HandholdKind::none)
