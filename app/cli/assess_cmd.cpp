@@ -56,7 +56,7 @@ bool exceeds(const ProjectAssessment& a, double threshold, std::string& worst) {
 }  // namespace
 
 void add_assess_command(CLI::App& app, int& exit_code) {
-  auto* cmd = app.add_subcommand("assess", "Assess the lift jobs of a project file");
+  auto* cmd = app.add_subcommand("assess", "Review the slots and assess the lift jobs of a project file");
   auto args = std::make_shared<AssessArgs>();
   cmd->add_option("FILE", args->file, "project file (*.rackreach.json)")->required();
   cmd->add_option("--format", args->format,
