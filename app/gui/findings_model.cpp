@@ -15,6 +15,10 @@ FindingsModel::FindingsModel(ProjectModel& model, QObject* parent) : QAbstractTa
     beginResetModel();
     endResetModel();
   });
+  connect(&model_, &ProjectModel::display_changed, this, [this] {
+    Q_EMIT headerDataChanged(Qt::Horizontal, 0, column_count - 1);
+    if (rowCount() > 0) Q_EMIT dataChanged(index(0, 0), index(rowCount() - 1, column_count - 1), {Qt::DisplayRole});
+  });
 }
 
 int FindingsModel::rowCount(const QModelIndex& parent) const {
@@ -26,7 +30,7 @@ int FindingsModel::columnCount(const QModelIndex& parent) const { return parent.
 
 QVariant FindingsModel::headerData(int section, Qt::Orientation o, int role) const {
   if (o != Qt::Horizontal || role != Qt::DisplayRole) return {};
-  const QString mu = q(mass_unit(model_.units()));
+  const UnitDisplay d = model_.display();
   switch (section) {
     case rank: return tr("Rank");
     case slot: return tr("Slot");
@@ -36,13 +40,13 @@ QVariant FindingsModel::headerData(int section, Qt::Orientation o, int role) con
     case level: return tr("Level");
     case bay: return tr("Bay");
     case position: return tr("Pos.");
-    case load: return tr("Load (%1)").arg(mu);
+    case load: return tr("Load (%1)").arg(d.mass_unit());
     case frequency: return tr("F (/min)");
     case li_origin: return tr("LI origin");
     case li_destination: return tr("LI dest.");
     case li: return tr("LI");
     case band: return tr("Band");
-    case reach: return tr("Reach");
+    case reach: return tr("Reach (margin, %1)").arg(d.length_unit());
     case remedies: return tr("Remedies");
   }
   return {};
@@ -101,7 +105,7 @@ QVariant FindingsModel::data(const QModelIndex& index, int role) const {
     case level: return q(f.level_id);
     case bay: return s.bay;
     case position: return s.position == SlotPosition::front ? tr("front") : tr("back");
-    case load: return fmt(f.lift.task.load, 2);
+    case load: return model_.display().mass_text(f.lift.task.load, 2);
     case frequency: return fmt(f.lift.task.frequency_per_min, 2);
     case li_origin: return fmt(f.result.origin.li, 2, none);
     case li_destination: return fmt(f.result.destination.li, 2, none);
@@ -110,7 +114,8 @@ QVariant FindingsModel::data(const QModelIndex& index, int role) const {
     case reach: {
       if (!f.reach) return tr("not checked");
       const ReachCheck* w = f.reach->find_worst_failure();
-      return w ? tr("fails: %1 (%2 cm)").arg(q(w->code), fmt(w->margin_cm, 1)) : tr("within reach");
+      return w ? tr("fails: %1 (%2)").arg(q(w->code), model_.display().cm_with_unit(w->margin_cm, 1))
+               : tr("within reach");
     }
     case remedies: return remedy_list(f);
   }

@@ -4,6 +4,7 @@
 #include <QScrollBar>
 
 #include "app/gui/band_palette.hpp"
+#include "app/gui/display_units.hpp"
 #include "app/gui/format.hpp"
 #include "engine/caution.hpp"
 
@@ -38,8 +39,8 @@ QString band_badge(RiskBand band, const std::optional<double>& li) {
 
 }  // namespace
 
-QString make_task_result_html(const LiftTask& task, const TaskResult& r, UnitSystem units) {
-  const QString lu = q(length_unit(units)), mu = q(mass_unit(units));
+QString make_task_result_html(const LiftTask& task, const TaskResult& r, const UnitDisplay& d) {
+  const QString lu = d.length_unit(), mu = d.mass_unit();
   QString h;
   h += QStringLiteral("<h3>Multipliers and results</h3><table border=1 cellspacing=0 cellpadding=3>"
                       "<tr><th></th><th>origin</th><th>input used</th><th>destination</th><th>input used</th></tr>");
@@ -47,15 +48,17 @@ QString make_task_result_html(const LiftTask& task, const TaskResult& r, UnitSys
     const char* name;
     const Multiplier PointResult::*m;
     QString unit;
-  } ms[] = {{"HM", &PointResult::hm, lu}, {"VM", &PointResult::vm, lu}, {"DM", &PointResult::dm, lu},
-            {"AM", &PointResult::am, "deg"}, {"FM", &PointResult::fm, "/min"}, {"CM", &PointResult::cm, lu + " (V)"}};
+    bool length;  ///< the input used is a length, shown in the shown unit
+  } ms[] = {{"HM", &PointResult::hm, lu, true},      {"VM", &PointResult::vm, lu, true},
+            {"DM", &PointResult::dm, lu, true},      {"AM", &PointResult::am, "deg", false},
+            {"FM", &PointResult::fm, "/min", false}, {"CM", &PointResult::cm, lu + " (V)", true}};
   for (const auto& m : ms) {
     const Multiplier& o = r.origin.*(m.m);
-    const Multiplier& d = r.destination.*(m.m);
+    const Multiplier& e = r.destination.*(m.m);
+    auto input = [&](const Multiplier& x) { return m.length ? d.length_text(x.input_used, 1) : fmt(x.input_used, 1); };
     h += QStringLiteral("<tr><td>%1</td><td align=right>%2</td><td>%3 %6</td><td align=right>%4</td>"
                         "<td>%5 %6</td></tr>")
-             .arg(m.name, multiplier_cell(o), fmt(o.input_used, 1), multiplier_cell(d), fmt(d.input_used, 1),
-                  esc(m.unit));
+             .arg(m.name, multiplier_cell(o), input(o), multiplier_cell(e), input(e), esc(m.unit));
   }
   const struct {
     const char* name;
@@ -64,7 +67,7 @@ QString make_task_result_html(const LiftTask& task, const TaskResult& r, UnitSys
   for (const auto& w : ws)
     h += QStringLiteral("<tr><td>%1</td><td align=right><b>%2</b></td><td>%4</td><td align=right><b>%3</b></td>"
                         "<td>%4</td></tr>")
-             .arg(w.name, fmt(r.origin.*(w.v), 3), fmt(r.destination.*(w.v), 3), mu);
+             .arg(w.name, d.mass_text(r.origin.*(w.v), 3), d.mass_text(r.destination.*(w.v), 3), mu);
   const struct {
     const char* name;
     std::optional<double> PointResult::*v;
@@ -78,7 +81,12 @@ QString make_task_result_html(const LiftTask& task, const TaskResult& r, UnitSys
                 task.control_at_destination ? QStringLiteral(" (significant control at the destination: the lower "
                                                              "RWL governs)")
                                             : QStringLiteral(" (no significant control at the destination)"),
-                fmt(task.load, 2), mu);
+                d.mass_text(task.load, 2), mu);
+  if (d.converts())
+    h += QStringLiteral("<p><small>Shown in %1 and %2; computed in the file's units (%3, %4) with the equation's "
+                        "%5 form.</small></p>")
+             .arg(lu, mu, d.file_length_unit(), d.file_mass_unit(),
+                  d.file() == UnitSystem::metric ? QStringLiteral("metric") : QStringLiteral("US"));
   return h;
 }
 
@@ -91,7 +99,9 @@ QString make_caution_html() {
 
 QString make_finding_html(const ProjectModel& model, const SlotFinding& f) {
   const UnitSystem u = model.units();
-  const QString lu = q(length_unit(u)), mu = q(mass_unit(u));
+  const UnitDisplay d = model.display();
+  const QString lu = d.length_unit(), mu = d.mass_unit();
+  auto len = [&](double v) { return d.length_text(v, 1); };
   const Store& store = model.project().store;
   const Slot& slot = store.slots.at(f.slot_index);
   const Part* part = store.find_part(f.part_id);
@@ -115,58 +125,59 @@ QString make_finding_html(const ProjectModel& model, const SlotFinding& f) {
   h += QStringLiteral("<h3>Inputs</h3><table cellspacing=0 cellpadding=2><tr><th align=left>input</th>"
                       "<th>value</th><th align=left>unit</th><th align=left>from</th></tr>");
   if (part) {
-    h += row("unit weight", fmt(part->unit_weight, 2), mu, "file (part " + q(part->id) + ")");
+    h += row("unit weight", d.mass_text(part->unit_weight, 2), mu, "file (part " + q(part->id) + ")");
     h += row("pieces per grasp", fmt(part->pieces_per_grasp, 2), "", "file or default 1 (part)");
   }
-  h += row("load L", fmt(t.load, 2), mu, "derived: unit weight x pieces per grasp");
+  h += row("load L", d.mass_text(t.load, 2), mu, "derived: unit weight x pieces per grasp");
   if (part) h += row("pieces per kit", fmt(part->pieces_per_kit, 2), "", "file or default 1 (part)");
   h += row("lifts per kit", fmt(f.lift.lifts_per_kit, 2), "", "derived: pieces per kit / pieces per grasp");
   h += row("kits per hour", fmt(store.kits_per_hour, 1), "/h", "file (demand)");
   h += row("frequency F", fmt(t.frequency_per_min, 3), "lifts/min", "derived: kits/h x lifts per kit / 60");
   h += row("coupling", q(std::string(coupling_name(t.coupling))), "", q(f.lift.coupling_reason));
   if (level) {
-    h += row("level surface", fmt(level->surface_height, 1), lu, "file (level " + q(level->id) + ")");
-    h += row("level clear height", fmt(level->clear_height, 1), lu, "file");
+    h += row("level surface", len(level->surface_height), lu, "file (level " + q(level->id) + ")");
+    h += row("level clear height", len(level->clear_height), lu, "file");
   }
-  if (rack) h += row("shelf depth", fmt(rack->shelf_depth, 1), lu, "file (rack " + q(rack->id) + ")");
-  h += row("grip height in the box", fmt(f.lift.grip_height, 1), lu,
+  if (rack) h += row("shelf depth", len(rack->shelf_depth), lu, "file (rack " + q(rack->id) + ")");
+  h += row("grip height in the box", len(f.lift.grip_height), lu,
            part && part->grip_height ? QStringLiteral("file (part)") : QStringLiteral("default: half the box height"));
-  h += row("standing distance", fmt(f.lift.standing_distance.value, 1), lu,
+  h += row("standing distance", len(f.lift.standing_distance.value), lu,
            source_text(f.lift.standing_distance, slot.standing_distance ? "slot" : "zone"));
-  h += row("hands in shelf", fmt(f.lift.hands_in_shelf, 1), lu, "derived: half the box depth from front or back");
-  h += row("origin H", fmt(t.origin.h, 1), lu, "derived: standing distance + hands in shelf");
-  h += row("origin V", fmt(t.origin.v, 1), lu, "derived: level surface + grip height");
+  h += row("hands in shelf", len(f.lift.hands_in_shelf), lu, "derived: half the box depth from front or back");
+  h += row("origin H", len(t.origin.h), lu, "derived: standing distance + hands in shelf");
+  h += row("origin V", len(t.origin.v), lu, "derived: level surface + grip height");
   h += row("origin A", fmt(t.origin.a_deg, 0), "deg",
            slot.origin_angle_deg ? QStringLiteral("file (slot)")
            : zone                ? source_text(zone->origin_angle_deg, "zone " + q(zone->id))
                                  : QStringLiteral("default"));
   if (zone) {
-    h += row("cart deck height", fmt(zone->cart_deck_height.value, 1), lu, source_text(zone->cart_deck_height, "zone"));
-    h += row("destination H", fmt(t.destination.h, 1), lu, source_text(zone->cart_h, "zone cart H"));
-    h += row("destination V", fmt(t.destination.v, 1), lu, "derived: cart deck + grip height");
+    h += row("cart deck height", len(zone->cart_deck_height.value), lu, source_text(zone->cart_deck_height, "zone"));
+    h += row("destination H", len(t.destination.h), lu, source_text(zone->cart_h, "zone cart H"));
+    h += row("destination V", len(t.destination.v), lu, "derived: cart deck + grip height");
     h += row("destination A", fmt(t.destination.a_deg, 0), "deg", source_text(zone->turn_angle_deg, "zone turn"));
   }
-  h += row("travel D", fmt(std::abs(t.destination.v - t.origin.v), 1), lu, "derived: |V dest - V origin|");
+  h += row("travel D", len(std::abs(t.destination.v - t.origin.v)), lu, "derived: |V dest - V origin|");
   h += row("significant control at destination", t.control_at_destination ? "yes" : "no", "",
            zone ? QStringLiteral("zone %1").arg(q(zone->id)) : QStringLiteral("default"));
   h += QStringLiteral("</table>");
 
-  h += make_task_result_html(t, f.result, u);
+  h += make_task_result_html(t, f.result, d);
 
   // Reach.
   h += QStringLiteral("<h3>Reach</h3>");
   if (f.reach) {
     const ReachResult& r = *f.reach;
-    h += QStringLiteral("<p>Small worker: %1, %2 (maximum-reach margin %3 cm, comfortable %4 cm); large worker: %5."
+    h += QStringLiteral("<p>Small worker: %1, %2 (maximum-reach margin %3, comfortable %4); large worker: %5."
                         "</p><ul>")
              .arg(esc(q(height_zone_name(r.small_height_zone))), esc(q(depth_zone_name(r.depth_zone))),
-                  fmt(r.small_max_reach_margin_cm, 1), fmt(r.small_comfortable_reach_margin_cm, 1),
+                  d.cm_with_unit(r.small_max_reach_margin_cm, 1),
+                  d.cm_with_unit(r.small_comfortable_reach_margin_cm, 1),
                   esc(q(height_zone_name(r.large_height_zone))));
     for (const ReachCheck& c : r.checks)
       h += QStringLiteral("<li>%1 <b>%2</b>: %3</li>")
                .arg(c.passed ? QStringLiteral("passes") : c.advisory ? QStringLiteral("advisory") : QStringLiteral("FAILS"),
-                    esc(c.code), esc(c.message.empty() ? std::string("margin ") + std::to_string(c.margin_cm) + " cm"
-                                                       : c.message));
+                    esc(c.code), c.message.empty() ? esc(QStringLiteral("margin ") + d.cm_with_unit(c.margin_cm, 1))
+                                                  : esc(c.message));
     h += QStringLiteral("</ul>");
   } else {
     h += QStringLiteral("<p>Not checked (no reach setup).</p>");
@@ -174,6 +185,9 @@ QString make_finding_html(const ProjectModel& model, const SlotFinding& f) {
 
   // Warnings, limits of application, remedies.
   h += QStringLiteral("<h3>Warnings</h3>");
+  if (d.converts())
+    h += QStringLiteral("<p><small>Warnings and reach sentences give their numbers in the units they were computed "
+                        "in, named beside each number.</small></p>");
   std::vector<const Warning*> all;
   for (const Warning& w : f.result.warnings) all.push_back(&w);
   for (const Warning& w : f.warnings) all.push_back(&w);
@@ -210,6 +224,7 @@ InspectorView::InspectorView(ProjectModel& model, QWidget* parent) : QTextBrowse
   setAccessibleName(tr("Inspector"));
   setOpenLinks(false);
   connect(&model_, &ProjectModel::changed, this, &InspectorView::refresh);
+  connect(&model_, &ProjectModel::display_changed, this, &InspectorView::refresh);
   refresh();
 }
 
@@ -222,12 +237,19 @@ void InspectorView::refresh() {
   const SlotFinding* f = selected_ ? model_.find_finding(*selected_) : nullptr;
   if (!f) {
     shown_li_.clear();
+    shown_load_.clear();
+    shown_rwl_origin_.clear();
+    shown_rwl_destination_.clear();
     setHtml(QStringLiteral("<h2>Inspector</h2><p>Select a slot in the rack drawing or in the findings list to see "
                            "every input, multiplier and result of its pick.</p>") +
             make_caution_html());
     return;
   }
   shown_li_ = f->result.li ? fmt(*f->result.li, 3) : QStringLiteral("outside");
+  const UnitDisplay d = model_.display();
+  shown_load_ = d.mass_with_unit(f->lift.task.load, 2);
+  shown_rwl_origin_ = d.mass_with_unit(f->result.origin.rwl, 3);
+  shown_rwl_destination_ = d.mass_with_unit(f->result.destination.rwl, 3);
   const int scroll = verticalScrollBar() ? verticalScrollBar()->value() : 0;
   setHtml(make_finding_html(model_, *f));
   if (verticalScrollBar()) verticalScrollBar()->setValue(scroll);

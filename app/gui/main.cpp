@@ -1,6 +1,6 @@
 // SPDX-License-Identifier: MIT
 // rackreach-gui [PROJECT]
-// rackreach-gui --screenshot OUT.png [--select SLOT] PROJECT   (renders offscreen and exits)
+// rackreach-gui --screenshot OUT.png [--select SLOT] [--units file|metric|us] PROJECT   (renders offscreen, exits)
 
 #include <QApplication>
 #include <QMessageBox>
@@ -14,13 +14,21 @@
 
 int main(int argc, char** argv) {
   QString screenshot, select, project;
+  rackreach::gui::DisplayChoice units = rackreach::gui::DisplayChoice::as_file;
   for (int i = 1; i < argc; ++i) {
     const std::string a = argv[i];
     if (a == "--screenshot" && i + 1 < argc) screenshot = QString::fromLocal8Bit(argv[++i]);
     else if (a == "--select" && i + 1 < argc) select = QString::fromLocal8Bit(argv[++i]);
-    else if (a == "--help" || a == "-h") {
+    else if (a == "--units" && i + 1 < argc) {
+      const auto c = rackreach::gui::parse_display_choice(QString::fromLocal8Bit(argv[++i]));
+      if (!c) {
+        std::fprintf(stderr, "rackreach-gui: --units takes file, metric or us, not %s\n", argv[i]);
+        return 2;
+      }
+      units = *c;
+    } else if (a == "--help" || a == "-h") {
       std::puts("usage: rackreach-gui [PROJECT]\n"
-                "       rackreach-gui --screenshot OUT.png [--select SLOT] PROJECT");
+                "       rackreach-gui --screenshot OUT.png [--select SLOT] [--units file|metric|us] PROJECT");
       return 0;
     } else if (!a.empty() && a[0] == '-' && a.rfind("-platform", 0) != 0) {
       std::fprintf(stderr, "rackreach-gui: unknown option %s\n", a.c_str());
@@ -36,7 +44,7 @@ int main(int argc, char** argv) {
   QApplication app(argc, argv);
   QApplication::setApplicationName("rackreach-gui");
   if (!screenshot.isEmpty()) {
-    const QString err = rackreach::gui::render_main_window(project, select, screenshot);
+    const QString err = rackreach::gui::render_main_window(project, select, screenshot, units);
     if (!err.isEmpty()) {
       std::fprintf(stderr, "%s\n", err.toLocal8Bit().constData());
       return 1;

@@ -2,6 +2,7 @@
 #include "app/gui/main_window.hpp"
 
 #include <QAction>
+#include <QActionGroup>
 #include <QApplication>
 #include <QCloseEvent>
 #include <QComboBox>
@@ -169,13 +170,13 @@ MainWindow::MainWindow(bool remember, QWidget* parent) : QMainWindow(parent), re
   connect(rack_view_, &RackView::slot_selected, this, [this](std::size_t s) { select_slot(s); });
   connect(findings_view_->selectionModel(), &QItemSelectionModel::currentRowChanged, this,
           [this](const QModelIndex& current) {
-            if (!current.isValid()) return;
+            if (syncing_selection_ || !current.isValid()) return;
             const QVariant v = current.siblingAtColumn(0).data(FindingsModel::slot_index_role);
             if (v.isValid()) select_slot(static_cast<std::size_t>(v.toULongLong()));
           });
   connect(slots_view_->selectionModel(), &QItemSelectionModel::currentRowChanged, this,
           [this](const QModelIndex& current) {
-            if (current.isValid()) select_slot(static_cast<std::size_t>(current.row()));
+            if (!syncing_selection_ && current.isValid()) select_slot(static_cast<std::size_t>(current.row()));
           });
   for (auto* t : {parts_, static_cast<PartsTableModel*>(nullptr)}) {
     if (!t) continue;
@@ -184,8 +185,21 @@ MainWindow::MainWindow(bool remember, QWidget* parent) : QMainWindow(parent), re
   connect(slots_, &SlotsTableModel::edit_refused, this, [this](const QString& why) { statusBar()->showMessage(why, 8000); });
   connect(&model_, &ProjectModel::changed, this, &MainWindow::refresh_lists);
   connect(&model_, &ProjectModel::file_changed, this, &MainWindow::refresh_title);
+  connect(&model_, &ProjectModel::file_changed, this, &MainWindow::on_display_changed);  // the file's units
+  connect(&model_, &ProjectModel::display_changed, this, [this] {
+    on_display_changed();
+    if (remember_)
+      QSettings(settings_org, settings_app).setValue("view/units", display_choice_key(model_.display_choice()));
+  });
+  units_label_ = new QLabel;
+  units_label_->setAccessibleName(tr("Units shown"));
+  statusBar()->addPermanentWidget(units_label_);
 
   build_menus();
+  if (remember_)
+    if (const auto c = parse_display_choice(QSettings(settings_org, settings_app).value("view/units").toString()))
+      model_.set_display_choice(*c);
+  on_display_changed();
   refresh_lists();
   refresh_title();
   statusBar()->showMessage(tr("Open a project file (Ctrl+O) to assess its store."));
@@ -243,6 +257,19 @@ void MainWindow::build_menus() {
     tabs_->setCurrentIndex(tabs_->count() - 1);
     task_form_->setFocus();
   });
+  // Units: what is shown only; the file keeps its units and everything is computed in them.
+  QMenu* units = view->addMenu(tr("&Units"));
+  auto* group = new QActionGroup(this);
+  const std::pair<DisplayChoice, QString> choices[] = {{DisplayChoice::as_file, tr("As in the &file")},
+                                                       {DisplayChoice::metric, tr("&Metric (cm, kg)")},
+                                                       {DisplayChoice::us, tr("&US (in, lb)")}};
+  for (const auto& [choice, text] : choices) {
+    QAction* a = units->addAction(text);
+    a->setCheckable(true);
+    group->addAction(a);
+    units_actions_[choice] = a;
+    connect(a, &QAction::triggered, this, [this, c = choice] { model_.set_display_choice(c); });
+  }
   update_recent_menu();
 }
 
@@ -271,19 +298,24 @@ void MainWindow::select_slot(std::optional<std::size_t> slot_index) {
     rack_list_->setCurrentRow(rack_view_->rack());
   }
   if (!slot_index) return;
+  // The lists follow the selection and scroll it into view. Their own signals stay on (a blocked selection model
+  // would not tell its view either), and the guard keeps them from selecting again.
+  syncing_selection_ = true;
   const int row = findings_->find_row(*slot_index);
   if (row >= 0) {
     const QModelIndex proxy = filter_->mapFromSource(findings_->index(row, 0));
-    if (proxy.isValid() && findings_view_->currentIndex().row() != proxy.row()) {
-      const QSignalBlocker b(findings_view_->selectionModel());
-      findings_view_->selectionModel()->setCurrentIndex(
-          proxy, QItemSelectionModel::ClearAndSelect | QItemSelectionModel::Rows);
+    if (proxy.isValid()) {
+      if (findings_view_->currentIndex().row() != proxy.row())
+        findings_view_->selectionModel()->setCurrentIndex(
+            proxy, QItemSelectionModel::ClearAndSelect | QItemSelectionModel::Rows);
       findings_view_->scrollTo(proxy);
     }
   }
-  const QSignalBlocker b(slots_view_->selectionModel());
-  slots_view_->selectionModel()->setCurrentIndex(slots_->index(static_cast<int>(*slot_index), 0),
+  const QModelIndex slot_row = slots_->index(static_cast<int>(*slot_index), 0);
+  slots_view_->selectionModel()->setCurrentIndex(slot_row,
                                                  QItemSelectionModel::ClearAndSelect | QItemSelectionModel::Rows);
+  slots_view_->scrollTo(slot_row);
+  syncing_selection_ = false;
 }
 
 void MainWindow::refresh_lists() {
@@ -343,6 +375,15 @@ void MainWindow::refresh_lists() {
 void MainWindow::apply_filter() {
   filter_->set_filter(band_filter_->currentData().toString(), family_filter_->currentData().toString(),
                       rack_filter_->currentData().toString(), remedy_filter_->currentData().toString());
+}
+
+void MainWindow::on_display_changed() {
+  const UnitDisplay d = model_.display();
+  if (const auto it = units_actions_.find(model_.display_choice()); it != units_actions_.end())
+    it->second->setChecked(true);
+  units_label_->setText(d.converts() ? tr("Units shown: %1, %2 (file: %3, %4)")
+                                           .arg(d.length_unit(), d.mass_unit(), d.file_length_unit(), d.file_mass_unit())
+                                     : tr("Units shown: %1, %2, as in the file").arg(d.length_unit(), d.mass_unit()));
 }
 
 void MainWindow::refresh_title() {

@@ -6,10 +6,12 @@
 
 #include <QMainWindow>
 
+#include <map>
 #include <optional>
 
 #include "app/gui/project_model.hpp"
 
+class QAction;
 class QComboBox;
 class QLabel;
 class QListWidget;
@@ -51,6 +53,8 @@ class MainWindow : public QMainWindow {
   QTableView* parts_view() const { return parts_view_; }
   QTabWidget* tabs() const { return tabs_; }
   QLabel* caution_label() const { return caution_; }
+  /// The View > Units action of a choice (checked when it is the one shown).
+  QAction* units_action(DisplayChoice c) const { return units_actions_.at(c); }
 
  protected:
   void closeEvent(QCloseEvent* e) override;
@@ -74,10 +78,12 @@ class MainWindow : public QMainWindow {
   void on_remove_part();
   void apply_filter();
   void show_problems(const QString& title, const QStringList& lines);
+  void on_display_changed();
 
   ProjectModel model_;
   bool remember_;
   std::optional<std::size_t> selected_;
+  bool syncing_selection_ = false;  ///< true while select_slot() moves the lists' current rows itself
   QListWidget* rack_list_ = nullptr;
   RackView* rack_view_ = nullptr;
   SectionView* section_ = nullptr;
@@ -98,6 +104,8 @@ class MainWindow : public QMainWindow {
   QLabel* caution_ = nullptr;
   QLabel* summary_ = nullptr;
   QMenu* recent_menu_ = nullptr;
+  std::map<DisplayChoice, QAction*> units_actions_;
+  QLabel* units_label_ = nullptr;
 };
 
 }  // namespace rackreach::gui

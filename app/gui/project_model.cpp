@@ -33,6 +33,12 @@ std::vector<Problem> ProjectModel::set_project(Project project, const QString& p
   return {};
 }
 
+void ProjectModel::set_display_choice(DisplayChoice choice) {
+  if (choice == display_choice_) return;
+  display_choice_ = choice;
+  Q_EMIT display_changed();
+}
+
 void ProjectModel::new_project(UnitSystem units) {
   Project p;
   p.units = units;

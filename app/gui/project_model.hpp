@@ -12,6 +12,7 @@
 #include <string>
 #include <vector>
 
+#include "app/gui/display_units.hpp"
 #include "engine/assess.hpp"
 #include "engine/problem.hpp"
 #include "engine/project.hpp"
@@ -61,6 +62,11 @@ class ProjectModel : public QObject {
   /// Problems of the last assessment's inputs (e.g. the workforce table could not be read).
   const std::vector<Problem>& assess_problems() const { return assess_problems_; }
   UnitSystem units() const { return project_.units; }
+  /// The units things are shown in (View > Units); the project and its computation keep units().
+  UnitDisplay display() const { return UnitDisplay(project_.units, display_choice_); }
+  DisplayChoice display_choice() const { return display_choice_; }
+  /// Changes only what is shown; emits display_changed() when the choice differs.
+  void set_display_choice(DisplayChoice choice);
   QString file_path() const { return path_; }
   bool modified() const { return !undo_.isClean(); }
   QUndoStack* undo_stack() { return &undo_; }
@@ -97,12 +103,14 @@ class ProjectModel : public QObject {
  Q_SIGNALS:
   void changed();
   void file_changed();  ///< the file name or the modified state changed
+  void display_changed();  ///< the shown units changed; the project did not
 
  private:
   void load_reach();
 
   Project project_;
   QString path_;
+  DisplayChoice display_choice_ = DisplayChoice::as_file;
   std::optional<ReachSetup> reach_;
   std::vector<Problem> assess_problems_;
   ProjectAssessment assessment_;

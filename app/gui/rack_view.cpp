@@ -16,7 +16,7 @@ namespace {
 
 constexpr double margin_left_px = 56, margin_top_px = 30, margin_bottom_px = 40, margin_right_px = 8;
 constexpr double worker_label_px = 112;  ///< room for the labels right of each worker's column
-constexpr double worker_bar_px = 22;     ///< a worker's column is drawn this wide: only its heights are to scale  ///< room for the labels right of each worker's column
+constexpr double worker_bar_px = 22;     ///< a worker's column is drawn this wide: only its heights are to scale
 
 /// A round tick step for a height axis about `span` long in `px` pixels.
 double tick_step(double span, double px) {
@@ -55,6 +55,7 @@ RackView::RackView(ProjectModel& model, QWidget* parent) : QWidget(parent), mode
   setAutoFillBackground(true);
   setAccessibleName(tr("Rack face drawing"));
   connect(&model_, &ProjectModel::changed, this, qOverload<>(&QWidget::update));
+  connect(&model_, &ProjectModel::display_changed, this, qOverload<>(&QWidget::update));
 }
 
 void RackView::set_rack(int rack_index) {
@@ -113,7 +114,8 @@ void RackView::paintEvent(QPaintEvent*) {
   QPainter p(this);
   p.setRenderHint(QPainter::Antialiasing);
   const Store& store = model_.project().store;
-  const QString lu = QString::fromUtf8(length_unit(model_.units()).data());
+  const UnitDisplay d = model_.display();
+  const QString lu = d.length_unit();
   if (rack_ < 0 || static_cast<std::size_t>(rack_) >= store.racks.size()) {
     p.drawText(rect(), Qt::AlignCenter, tr("No racks in this project: open a project with a store, or import a "
                                            "slot list."));
@@ -132,18 +134,19 @@ void RackView::paintEvent(QPaintEvent*) {
              tr("Rack %1 (%2, zone %3): face, %4 bays of %5 %6, shelf depth %7 %6")
                  .arg(q(rack.id), kind, q(rack.zone))
                  .arg(rack.bays)
-                 .arg(fmt(rack.bay_width, 0), lu, fmt(rack.shelf_depth, 0)));
+                 .arg(d.length_text(rack.bay_width, 0), lu, d.length_text(rack.shelf_depth, 0)));
   p.setFont(base);
 
-  // Height axis.
+  // Height axis: round ticks in the shown unit, placed on the drawing (kept in the file's units).
   const QPointF floor_left = to_px_.map(QPointF(0, 0));
   double top = 0;
   for (const Level& l : rack.levels) top = std::max(top, l.surface_height + l.clear_height);
   const double scale = to_px_.m11();
-  const double step = tick_step(top, top * scale);
+  const double top_shown = d.length(top);
+  const double step = tick_step(top_shown, top * scale);
   p.setPen(palette().color(QPalette::Text));
-  for (double z = 0; z <= top * 1.001; z += step) {
-    const QPointF a = to_px_.map(QPointF(0, z));
+  for (double z = 0; z <= top_shown * 1.001; z += step) {
+    const QPointF a = to_px_.map(QPointF(0, d.length_to_file(z)));
     p.drawLine(QPointF(a.x() - 5, a.y()), QPointF(a.x() - 1, a.y()));
     p.drawText(QRectF(0, a.y() - 8, a.x() - 7, 16), Qt::AlignRight | Qt::AlignVCenter, fmt(z, 0));
   }
@@ -252,7 +255,7 @@ void RackView::paintEvent(QPaintEvent*) {
         p.drawLine(QPointF(bar.left() - 3, a.y()), QPointF(bar.right() + 3, a.y()));
         double y = std::min(a.y(), last_y - m.height());  // keep close labels apart
         p.drawText(QRectF(bar.right() + 5, y - m.height() / 2, worker_label_px, m.height()),
-                   Qt::AlignLeft | Qt::AlignVCenter, tr("%1 %2 %3").arg(mk.name, fmt(mk.z, 0), lu));
+                   Qt::AlignLeft | Qt::AlignVCenter, tr("%1 %2").arg(mk.name, d.length_with_unit(mk.z, 0)));
         last_y = y;
       }
       p.setFont(title);

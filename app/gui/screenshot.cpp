@@ -17,9 +17,14 @@ QString save_widget_png(QWidget& w, const QString& path, QSize size) {
   return {};
 }
 
-QString render_main_window(const QString& project, const QString& slot_id, const QString& out) {
+QString render_main_window(const QString& project, const QString& slot_id, const QString& out, DisplayChoice units) {
   MainWindow w(false);
+  w.model().set_display_choice(units);
   if (const QStringList problems = w.open_file(project); !problems.isEmpty()) return problems.join('\n');
+  // Laid out first, so that selecting can scroll the lists to the slot as it would on screen.
+  w.resize(QSize(1280, 800));
+  w.show();
+  QApplication::processEvents();
   if (!slot_id.isEmpty()) {
     const auto slot = w.model().find_slot(slot_id.toStdString());
     if (!slot) return QStringLiteral("%1: there is no slot \"%2\"").arg(project, slot_id);

@@ -15,6 +15,7 @@ SectionView::SectionView(ProjectModel& model, QWidget* parent) : QWidget(parent)
   setAutoFillBackground(true);
   setAccessibleName(tr("Side section of the selected level"));
   connect(&model_, &ProjectModel::changed, this, qOverload<>(&QWidget::update));
+  connect(&model_, &ProjectModel::display_changed, this, qOverload<>(&QWidget::update));
 }
 
 void SectionView::set_selected_slot(std::optional<std::size_t> slot_index) {
@@ -32,7 +33,8 @@ void SectionView::paintEvent(QPaintEvent*) {
                tr("Side section: select a slot in the rack drawing or the findings list."));
     return;
   }
-  const QString lu = q(length_unit(model_.units()));
+  const UnitDisplay d = model_.display();
+  const QString lu = d.length_unit();
   QFont base = font();
   QFont small = base;
   small.setPointSizeF(std::max(6.5, base.pointSizeF() - 1));
@@ -77,7 +79,7 @@ void SectionView::paintEvent(QPaintEvent*) {
   p.setPen(QPen(QColor(0x90, 0x30, 0x00), 1, Qt::DotLine));
   p.drawLine(at(g->h_limit_x, 0), at(g->h_limit_x, z1 - 4));
   p.drawText(QRectF(at(g->h_limit_x, z1 - 2) + QPointF(3, 0), QSizeF(120, 14)), Qt::AlignLeft,
-             tr("H limit %1 %2").arg(fmt(g->h_limit_x - g->ankles_x, 0), lu));
+             tr("H limit %1").arg(d.length_with_unit(g->h_limit_x - g->ankles_x, 0)));
 
   // Picker: ankles and shoulder pivot; reach arcs of the small worker.
   p.setPen(QPen(QColor(0x20, 0x20, 0x20), 1));
@@ -101,10 +103,11 @@ void SectionView::paintEvent(QPaintEvent*) {
   // Legend in words, with the numbers.
   p.setPen(palette().color(QPalette::Text));
   QString legend = tr("grip %1 %3 behind the face, %2 %3 high; shelf depth %4 %3")
-                       .arg(fmt(g->grip_x, 0), fmt(g->grip_z, 0), lu, fmt(g->shelf_depth, 0));
+                       .arg(d.length_text(g->grip_x, 0), d.length_text(g->grip_z, 0), lu,
+                            d.length_text(g->shelf_depth, 0));
   if (arc)
     legend += tr("\nsmall worker: reach %1 %3 (solid), comfortable %2 %3 (dashed) from the shoulder")
-                  .arg(fmt(g->max_reach, 1), fmt(g->comfortable_reach, 1), lu);
+                  .arg(d.length_text(g->max_reach, 1), d.length_text(g->comfortable_reach, 1), lu);
   else
     legend += tr("\nno reach setup: reach arcs are not drawn");
   p.setFont(small);

@@ -24,6 +24,9 @@ PartsTableModel::PartsTableModel(ProjectModel& model, QObject* parent) : QAbstra
     beginResetModel();
     endResetModel();
   });
+  // The table shows and edits in the file's units; only its headers say so when the rest of the app converts.
+  connect(&model_, &ProjectModel::display_changed, this,
+          [this] { Q_EMIT headerDataChanged(Qt::Horizontal, 0, column_count - 1); });
 }
 
 int PartsTableModel::rowCount(const QModelIndex& parent) const {
@@ -32,7 +35,10 @@ int PartsTableModel::rowCount(const QModelIndex& parent) const {
 
 QVariant PartsTableModel::headerData(int section, Qt::Orientation o, int role) const {
   if (o != Qt::Horizontal || role != Qt::DisplayRole) return {};
-  const QString mu = q(mass_unit(model_.units())), lu = q(length_unit(model_.units()));
+  // Values here are in the file's units, whatever View > Units shows elsewhere (an edit is stored as typed).
+  const UnitDisplay d = model_.display();
+  const QString as_file = d.converts() ? tr(", as in the file") : QString();
+  const QString mu = d.file_mass_unit() + as_file, lu = d.file_length_unit() + as_file;
   switch (section) {
     case id: return tr("Part");
     case family: return tr("Family");

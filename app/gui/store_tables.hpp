@@ -1,7 +1,9 @@
 // SPDX-License-Identifier: MIT
 #pragma once
 // Editable tables of the store's parts and slots. An edit is checked by the project model and, if it is
-// acceptable, pushed as an undoable command; a refused edit says why (edit_refused).
+// acceptable, pushed as an undoable command; a refused edit says why (edit_refused). The tables show and edit
+// lengths and masses in the project file's own units whatever View > Units says (their headers then say "as in
+// the file"), so that a value typed is stored exactly as typed.
 
 #include <QAbstractTableModel>
 

@@ -263,7 +263,8 @@ void TaskForm::recheck() {
                              fmt(r.li, 3, tr("outside (undefined)")), q(std::string(band_name(band))))
                         .arg(shown_rwl(LiftEnd::origin), shown_li(LiftEnd::origin), shown_rwl(LiftEnd::destination),
                              shown_li(LiftEnd::destination), mu, q(lift_end_name(r.governing))));
-  QString html = make_task_result_html(check_.job->tasks.front(), r, u);
+  // The form edits a task in the file's units, so its results are shown in them too, whatever View > Units says.
+  QString html = make_task_result_html(check_.job->tasks.front(), r, UnitDisplay(u, DisplayChoice::as_file));
   html += QStringLiteral("<h3>Warnings and limits of application</h3>");
   if (r.warnings.empty() && check_.result->warnings.empty()) html += tr("<p>None: the task is within the limits of "
                                                                          "application given.</p>");

@@ -5,8 +5,10 @@
 
 #include <catch2/catch.hpp>
 
+#include <QAction>
 #include <QCheckBox>
 #include <QComboBox>
+#include <QApplication>
 #include <QDir>
 #include <QFile>
 #include <QImage>
@@ -81,6 +83,92 @@ TEST_CASE("selecting a slot shows the LI of assess_project and of the CLI's gold
   w.select_slot(*slot);
   CHECK(w.rack_view()->selected_slot() == slot);
   CHECK(w.findings_view()->currentIndex().siblingAtColumn(FindingsModel::slot).data().toString() == "HP-3-1C-F");
+}
+
+TEST_CASE("View > Units shows the metric demo store in lb and in, and changes nothing in the file") {
+  MainWindow w(false);
+  REQUIRE(w.open_file(demo).isEmpty());
+  ProjectModel& m = w.model();
+  REQUIRE(m.units() == UnitSystem::metric);
+  const std::string text_before = m.project_text();
+  const auto slot = m.find_slot("HP-3-1C-F");
+  REQUIRE(slot);
+  w.select_slot(*slot);
+  const SlotFinding& f = *m.find_finding(*slot);
+  const QString li_before = w.inspector()->shown_li();
+  const double load_kg = f.lift.task.load, rwl_kg = f.result.origin.rwl;
+  CHECK(w.inspector()->shown_load() == QString::number(load_kg, 'f', 2) + " kg");
+  CHECK(w.units_action(DisplayChoice::as_file)->isChecked());
+
+  // A shown "number unit" pair.
+  auto number = [](const QString& shown, const char* unit) {
+    const QStringList parts = shown.split(' ');
+    REQUIRE(parts.size() == 2);
+    CHECK(parts[1] == unit);
+    return parts[0].toDouble();
+  };
+  w.units_action(DisplayChoice::us)->trigger();
+  CHECK(m.display_choice() == DisplayChoice::us);
+  CHECK(w.units_action(DisplayChoice::us)->isChecked());
+  CHECK(number(w.inspector()->shown_load(), "lb") == Approx(load_kg / 0.45359237).margin(0.005));
+  CHECK(number(w.inspector()->shown_rwl(LiftEnd::origin), "lb") == Approx(rwl_kg / 0.45359237).margin(0.0005));
+  CHECK(w.inspector()->shown_li() == li_before);
+  CHECK(w.inspector()->toPlainText().contains(" lb"));
+  // The findings list's load column and its header follow; the parts table stays in the file's units and says so.
+  const QAbstractItemModel* findings = w.findings_view()->model();
+  CHECK(findings->headerData(FindingsModel::load, Qt::Horizontal, Qt::DisplayRole).toString() == "Load (lb)");
+  const QModelIndex current = w.findings_view()->currentIndex();
+  CHECK(current.siblingAtColumn(FindingsModel::slot).data().toString() == "HP-3-1C-F");
+  CHECK(current.siblingAtColumn(FindingsModel::load).data().toString() ==
+        QString::number(load_kg / 0.45359237, 'f', 2));
+  CHECK(w.parts_view()->model()->headerData(PartsTableModel::unit_weight, Qt::Horizontal, Qt::DisplayRole).toString() ==
+        "Unit weight (kg, as in the file)");
+  // Everything computed stays as it was, in the file's units.
+  CHECK(m.find_finding(*slot)->lift.task.load == load_kg);
+  CHECK(m.find_finding(*slot)->result.origin.rwl == rwl_kg);
+  CHECK(m.project_text() == text_before);
+  CHECK_FALSE(m.modified());
+
+  w.units_action(DisplayChoice::metric)->trigger();
+  CHECK(w.inspector()->shown_load() == QString::number(load_kg, 'f', 2) + " kg");
+  CHECK(w.inspector()->shown_rwl(LiftEnd::origin) == QString::number(rwl_kg, 'f', 3) + " kg");
+  CHECK(w.inspector()->shown_li() == li_before);
+  CHECK(findings->headerData(FindingsModel::load, Qt::Horizontal, Qt::DisplayRole).toString() == "Load (kg)");
+  CHECK(m.project_text() == text_before);
+
+  // Saved after the switches, the file is the file as it was.
+  QTemporaryDir dir;
+  REQUIRE(dir.isValid());
+  w.units_action(DisplayChoice::us)->trigger();
+  const QString path = dir.filePath("shown-in-us.rackreach.json");
+  REQUIRE_FALSE(w.save_to(path));
+  QFile saved(path);
+  REQUIRE(saved.open(QIODevice::ReadOnly));
+  CHECK(saved.readAll().toStdString() == text_before);
+}
+
+TEST_CASE("selecting a slot elsewhere scrolls its finding into view") {
+  MainWindow w(false);
+  REQUIRE(w.open_file(demo).isEmpty());
+  w.resize(1280, 800);
+  w.show();
+  QApplication::processEvents();
+  // The lowest-ranked finding, far below the rows the list shows at first.
+  const std::string last = w.model().review()->findings.back().slot_id;
+  w.select_slot(*w.model().find_slot(last));
+  QApplication::processEvents();
+  QTableView* v = w.findings_view();
+  const QModelIndex current = v->currentIndex();
+  REQUIRE(current.isValid());
+  CHECK(current.siblingAtColumn(FindingsModel::slot).data().toString() == QString::fromStdString(last));
+  CHECK(v->viewport()->rect().contains(v->visualRect(current)));
+  // Already the current row but scrolled away (the list was scrolled by hand): selecting it again shows it.
+  v->scrollToTop();
+  QApplication::processEvents();
+  REQUIRE_FALSE(v->viewport()->rect().intersects(v->visualRect(v->currentIndex())));
+  w.select_slot(*w.model().find_slot(last));
+  QApplication::processEvents();
+  CHECK(v->viewport()->rect().contains(v->visualRect(v->currentIndex())));
 }
 
 TEST_CASE("editing a part's weight in the table re-ranks the findings; undo restores them") {
@@ -281,6 +369,9 @@ TEST_CASE("pictures of the main window and the task form") {
   CHECK(main.width() == 1280);
   CHECK(main.height() == 800);
   CHECK(render_main_window(demo, "NO-SUCH-SLOT", out + "/x.png").contains("NO-SUCH-SLOT"));
+  const QString us_png = out + "/main-window-us.png";
+  REQUIRE(render_main_window(demo, "HP-3-1C-F", us_png, DisplayChoice::us).isEmpty());
+  CHECK(QImage(us_png).width() == 1280);
 
   // The form with a task typed in and one field out of range.
   ProjectModel m;
