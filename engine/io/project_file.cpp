@@ -8,6 +8,7 @@
 #include <sstream>
 
 #include "engine/io/json_reader.hpp"
+#include "engine/io/shared_readers.hpp"
 #include "engine/io/store_loader.hpp"
 
 namespace rackreach {
@@ -185,7 +186,7 @@ class ProjectLoader {
       if (auto d = r_.choice(j, path, "duration", true, {"short", "moderate", "long"}))
         job.declared_duration = find_duration(*d);
     } else {
-      load_pattern(*pattern, JsonPath(path, "work_pattern"), job);
+      if (auto periods = read_work_pattern(r_, *pattern, JsonPath(path, "work_pattern"))) job.work_pattern = *periods;
     }
     if (const json* tasks = r_.member(j, path, "tasks", true)) {
       const JsonPath tasks_path(path, "tasks");
@@ -210,22 +211,6 @@ class ProjectLoader {
     return job;
   }
 
-  void load_pattern(const json& j, const JsonPath& path, LiftJob& job) {
-    if (!r_.array(j, path, 1, "periods")) return;
-    for (std::size_t i = 0; i < j.size(); ++i) {
-      const JsonPath p(path, i);
-      if (!r_.object(j[i], p, {"lifting_min", "recovery_min"})) continue;
-      const bool lifting = j[i].contains("lifting_min");
-      if (lifting == j[i].contains("recovery_min")) {
-        r_.add("invalid_value", p, &j[i], "each period gives exactly one of lifting_min or recovery_min");
-        continue;
-      }
-      const NumberRule minutes{0.0, 24.0 * 60.0, true, false, "min"};
-      if (auto m = r_.number(j[i], p, lifting ? "lifting_min" : "recovery_min", true, minutes))
-        job.work_pattern.push_back({lifting ? WorkPeriod::Kind::lifting : WorkPeriod::Kind::recovery, *m});
-    }
-  }
-
   std::optional<LiftPoint> load_point(const json& task, const JsonPath& task_path, std::string_view key) {
     const json* j = r_.member(task, task_path, key, true);
     if (!j) return std::nullopt;
@@ -237,23 +222,6 @@ class ProjectLoader {
     auto a = r_.number(*j, path, "a", false, {0.0, 180.0, false, false, "deg (an angle magnitude)"});
     if (!h || !v || (j->contains("a") && !a)) return std::nullopt;
     return LiftPoint{*h, *v, a.value_or(0.0)};
-  }
-
-  void load_limits(const json& j, const JsonPath& path, LimitsOfApplication& l) {
-    if (!r_.object(j, path,
-                   {"one_handed", "seated_or_kneeling", "restricted_space", "unstable_load", "wheelbarrow_or_shovel",
-                    "high_speed", "carry_push_share", "floor_friction", "temperature_c", "humidity_pct"}))
-      return;
-    l.one_handed = r_.boolean(j, path, "one_handed", false);
-    l.seated_or_kneeling = r_.boolean(j, path, "seated_or_kneeling", false);
-    l.restricted_space = r_.boolean(j, path, "restricted_space", false);
-    l.unstable_load = r_.boolean(j, path, "unstable_load", false);
-    l.wheelbarrow_or_shovel = r_.boolean(j, path, "wheelbarrow_or_shovel", false);
-    l.high_speed = r_.boolean(j, path, "high_speed", false);
-    l.carry_push_share = r_.number(j, path, "carry_push_share", false, {0.0, 1.0, false, false, "(fraction of the work)"});
-    l.floor_friction = r_.number(j, path, "floor_friction", false, {0.0, 2.0, false, false, "(coefficient)"});
-    l.temperature_c = r_.number(j, path, "temperature_c", false, {-60.0, 70.0, false, false, "C"});
-    l.humidity_pct = r_.number(j, path, "humidity_pct", false, {0.0, 100.0, false, false, "%"});
   }
 
   void load_task(const json& j, const JsonPath& path, LiftJob& job) {
@@ -289,7 +257,7 @@ class ProjectLoader {
     if (auto o = load_point(j, path, "origin")) t.origin = *o;
     if (auto d = load_point(j, path, "destination")) t.destination = *d;
     t.control_at_destination = r_.boolean(j, path, "control_at_destination", false).value_or(false);
-    if (const json* l = r_.member(j, path, "limits", false)) load_limits(*l, JsonPath(path, "limits"), t.limits);
+    if (const json* l = r_.member(j, path, "limits", false)) t.limits = read_limits(r_, *l, JsonPath(path, "limits"));
     std::optional<ShelfGeometry> shelf;
     if (const json* sh = r_.member(j, path, "shelf", false)) shelf = load_shelf(*sh, JsonPath(path, "shelf"), t.origin.v);
     r_.set_context(job_context);

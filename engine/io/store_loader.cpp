@@ -1,6 +1,8 @@
 // SPDX-License-Identifier: MIT
 #include "engine/io/store_loader.hpp"
 
+#include "engine/io/shared_readers.hpp"
+
 #include <map>
 #include <set>
 #include <tuple>
@@ -123,23 +125,6 @@ class StoreReader::Impl {
     return sh;
   }
 
-  std::optional<std::vector<WorkPeriod>> load_pattern(const json& j, const JsonPath& p) {
-    if (!r_.array(j, p, 1, "periods")) return std::nullopt;
-    std::vector<WorkPeriod> out;
-    for (std::size_t i = 0; i < j.size(); ++i) {
-      const JsonPath ip(p, i);
-      if (!r_.object(j[i], ip, {"lifting_min", "recovery_min"})) continue;
-      const bool lifting = j[i].contains("lifting_min");
-      if (lifting == j[i].contains("recovery_min")) {
-        r_.add("invalid_value", ip, &j[i], "each period gives exactly one of lifting_min or recovery_min");
-        continue;
-      }
-      if (auto m = r_.number(j[i], ip, lifting ? "lifting_min" : "recovery_min", true, {0.0, 1440.0, true, false, "min"}))
-        out.push_back({lifting ? WorkPeriod::Kind::lifting : WorkPeriod::Kind::recovery, *m});
-    }
-    return out;
-  }
-
   SourcedValue sourced(const json& j, const JsonPath& p, const char* key, double default_cm_or_deg, bool is_length,
                        double max) {
     const double def = is_length ? Length{default_cm_or_deg, UnitSystem::metric}.in_units(units_) : default_cm_or_deg;
@@ -163,23 +148,8 @@ class StoreReader::Impl {
     z.origin_angle_deg = sourced(j, p, "origin_angle", ZoneDefaults::origin_angle_deg, false, 180.0);
     z.control_at_destination = r_.boolean(j, p, "control_at_destination", false).value_or(false);
     if (const json* lp = r_.member(j, p, "lifting_pattern", false))
-      z.lifting_pattern = load_pattern(*lp, JsonPath(p, "lifting_pattern"));
-    if (const json* l = r_.member(j, p, "limits", false)) {
-      const JsonPath lpath(p, "limits");
-      if (r_.object(*l, lpath,
-                    {"one_handed", "seated_or_kneeling", "restricted_space", "unstable_load", "high_speed",
-                     "carry_push_share", "floor_friction", "temperature_c", "humidity_pct"})) {
-        z.limits.one_handed = r_.boolean(*l, lpath, "one_handed", false);
-        z.limits.seated_or_kneeling = r_.boolean(*l, lpath, "seated_or_kneeling", false);
-        z.limits.restricted_space = r_.boolean(*l, lpath, "restricted_space", false);
-        z.limits.unstable_load = r_.boolean(*l, lpath, "unstable_load", false);
-        z.limits.high_speed = r_.boolean(*l, lpath, "high_speed", false);
-        z.limits.carry_push_share = r_.number(*l, lpath, "carry_push_share", false, {0.0, 1.0, false, false, ""});
-        z.limits.floor_friction = r_.number(*l, lpath, "floor_friction", false, {0.0, 2.0, false, false, ""});
-        z.limits.temperature_c = r_.number(*l, lpath, "temperature_c", false, {-60.0, 70.0, false, false, "C"});
-        z.limits.humidity_pct = r_.number(*l, lpath, "humidity_pct", false, {0.0, 100.0, false, false, "%"});
-      }
-    }
+      z.lifting_pattern = read_work_pattern(r_, *lp, JsonPath(p, "lifting_pattern"));
+    if (const json* l = r_.member(j, p, "limits", false)) z.limits = read_limits(r_, *l, JsonPath(p, "limits"));
     if (!z.id.empty() && !zone_ids_.insert(z.id).second)
       r_.add("duplicate_id", JsonPath(p, "id"), &j.at("id"), "zone ids must be unique");
     s.zones.push_back(std::move(z));

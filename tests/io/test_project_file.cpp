@@ -4,6 +4,7 @@
 
 #include <catch2/catch.hpp>
 #include <filesystem>
+#include <nlohmann/json.hpp>
 #include <string>
 
 #include "engine/io/assessment_output.hpp"
@@ -152,6 +153,27 @@ TEST_CASE("Save and load again: the same project, every sample", "[io][save]") {
     CHECK(write_assessment_json(*first.project, a1, {"x"}) == write_assessment_json(*second.project, a2, {"x"}));
   }
   CHECK(count >= 4);
+}
+
+TEST_CASE("Zone and task limits follow one set of rules, and a saved zone's limits load again", "[io][limits]") {
+  auto doc = nlohmann::json::parse(
+      *shared_reference::read_text(shared_reference::repo_path("tests/data/store_minimal.rackreach.json")));
+  doc["zones"][0]["limits"] = {{"wheelbarrow_or_shovel", true}, {"floor_friction", 0.3}};
+  doc["zones"][0]["lifting_pattern"] = nlohmann::json::array({{{"lifting_min", 50}}, {{"recovery_min", 60}}});
+  const LoadResult r = load_project_text(doc.dump());
+  for (const auto& p : r.problems) INFO(format_problem("zone", p));
+  REQUIRE(r.project);
+  CHECK(r.project->store.zones[0].limits.wheelbarrow_or_shovel == true);
+  CHECK(r.project->store.zones[0].lifting_pattern->size() == 2);
+  const LoadResult again = load_project_text(save_project_text(*r.project));
+  REQUIRE(again.project);
+  CHECK(again.project->store.zones[0].limits.floor_friction == 0.3);
+  // The same rule in both places: a humidity above 100% is refused in a zone as in a task.
+  doc["zones"][0]["limits"]["humidity_pct"] = 120;
+  const LoadResult bad = load_project_text(doc.dump());
+  REQUIRE(bad.problems.size() == 1);
+  CHECK(bad.problems[0].path == "zones[0].limits.humidity_pct");
+  CHECK(bad.problems[0].code == "out_of_range");
 }
 
 TEST_CASE("The template loads and is valid in both unit systems", "[io][template]") {
