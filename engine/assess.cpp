@@ -85,6 +85,19 @@ JobAssessment assess_job(const LiftJob& job, UnitSystem units, DurationRule rule
   return out;
 }
 
+ReviewOptions make_review_options(const AssessOptions& options, DurationRule rule) {
+  ReviewOptions ro;
+  ro.rounding = options.rounding;
+  ro.duration_rule = rule;
+  ro.bands = options.bands;
+  if (options.reach) {
+    ro.small = &options.reach->small;
+    ro.large = &options.reach->large;
+    ro.reach_parameters = options.reach->parameters;
+  }
+  return ro;
+}
+
 ProjectAssessment assess_project(const Project& project, const AssessOptions& options) {
   ProjectAssessment out;
   out.units = project.units;
@@ -97,16 +110,7 @@ ProjectAssessment assess_project(const Project& project, const AssessOptions& op
     out.jobs.push_back(assess_job(job, project.units, out.duration_rule, options.rounding,
                                   options.reach ? &*options.reach : nullptr));
   if (!project.store.slots.empty()) {
-    ReviewOptions ro;
-    ro.rounding = options.rounding;
-    ro.duration_rule = out.duration_rule;
-    ro.bands = options.bands;
-    if (options.reach) {
-      ro.small = &options.reach->small;
-      ro.large = &options.reach->large;
-      ro.reach_parameters = options.reach->parameters;
-    }
-    out.store = review_store(project.store, project.units, ro);
+    out.store = review_store(project.store, project.units, make_review_options(options, out.duration_rule));
   }
   return out;
 }

@@ -53,6 +53,10 @@ struct ProjectAssessment {
   std::optional<StoreReview> store;  ///< when the project has slots
 };
 
+/// The slot review's options for an assessment: its rounding and bands, the duration rule, and the reach workers
+/// of `options.reach` (which must outlive the result: it points into them).
+ReviewOptions make_review_options(const AssessOptions& options, DurationRule rule);
+
 JobAssessment assess_job(const LiftJob& job, UnitSystem units, DurationRule rule, RoundingMode mode,
                          const ReachSetup* reach = nullptr);
 ProjectAssessment assess_project(const Project& project, const AssessOptions& options);

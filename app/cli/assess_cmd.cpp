@@ -3,8 +3,6 @@
 
 #include <iostream>
 
-#include "anthropometry/data_dir.hpp"
-#include "anthropometry/reach_setup.hpp"
 #include "app/cli/commands.hpp"
 #include "engine/assess.hpp"
 #include "engine/io/assessment_output.hpp"
@@ -80,13 +78,8 @@ void add_assess_command(CLI::App& app, int& exit_code) {
     if (!project) return;
     AssessOptions options;
     if (project->has_shelf_geometry()) {
-      LoadedReachSetup reach = load_reach_setup(*project, find_data_dir());
-      if (!reach.setup) {
-        print_problems(args->file, reach.problems);
-        exit_code = exit_invalid_input;
-        return;
-      }
-      options.reach = std::move(reach.setup);
+      options.reach = load_reach_or_report(args->file, *project, exit_code);
+      if (!options.reach) return;
     }
     options.rounding = args->rounding == "worksheet" ? RoundingMode::worksheet : RoundingMode::full;
     if (!args->duration_rule.empty()) options.duration_rule = find_duration_rule(args->duration_rule);

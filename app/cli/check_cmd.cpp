@@ -3,6 +3,8 @@
 
 #include <iostream>
 
+#include "anthropometry/data_dir.hpp"
+#include "anthropometry/reach_setup.hpp"
 #include "app/cli/commands.hpp"
 #include "engine/io/project_file.hpp"
 
@@ -21,6 +23,15 @@ std::optional<Project> load_or_report(const std::string& file, int& exit_code) {
     exit_code = exit_invalid_input;
   }
   return std::move(r.project);
+}
+
+std::optional<ReachSetup> load_reach_or_report(const std::string& file, const Project& project, int& exit_code) {
+  LoadedReachSetup reach = load_reach_setup(project, find_data_dir());
+  if (!reach.setup) {
+    print_problems(file, reach.problems);
+    exit_code = exit_invalid_input;
+  }
+  return std::move(reach.setup);
 }
 
 void add_check_command(CLI::App& app, int& exit_code) {

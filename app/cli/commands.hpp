@@ -8,6 +8,7 @@
 #include <vector>
 
 #include "engine/problem.hpp"
+#include "engine/assess.hpp"
 #include "engine/project.hpp"
 
 namespace rackreach::cli {
@@ -25,6 +26,9 @@ void add_reslot_command(CLI::App& app, int& exit_code);
 
 /// Loads a project file; on problems prints them, sets exit code 1 and returns nothing.
 std::optional<Project> load_or_report(const std::string& file, int& exit_code);
+
+/// Loads the reach workers of a project's workforce; on problems prints them, sets exit code 1, returns nothing.
+std::optional<ReachSetup> load_reach_or_report(const std::string& file, const Project& project, int& exit_code);
 
 /// Prints every problem to stderr, one per line, naming the file.
 void print_problems(const std::string& file, const std::vector<Problem>& problems,

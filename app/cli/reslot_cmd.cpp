@@ -5,8 +5,6 @@
 #include <iostream>
 #include <map>
 
-#include "anthropometry/data_dir.hpp"
-#include "anthropometry/reach_setup.hpp"
 #include "app/cli/commands.hpp"
 #include "engine/caution.hpp"
 #include "engine/io/assessment_output.hpp"
@@ -58,19 +56,10 @@ void add_reslot_command(CLI::App& app, int& exit_code) {
       exit_code = exit_invalid_input;
       return;
     }
-    ReviewOptions ro;
-    ro.duration_rule = project->duration_rule;
-    std::optional<ReachSetup> reach;
-    LoadedReachSetup loaded = load_reach_setup(*project, find_data_dir());
-    if (!loaded.setup) {
-      print_problems(args->file, loaded.problems);
-      exit_code = exit_invalid_input;
-      return;
-    }
-    reach = std::move(loaded.setup);
-    ro.small = &reach->small;
-    ro.large = &reach->large;
-    ro.reach_parameters = reach->parameters;
+    AssessOptions options;
+    options.reach = load_reach_or_report(args->file, *project, exit_code);
+    if (!options.reach) return;
+    const ReviewOptions ro = make_review_options(options, project->duration_rule);
     ReslotRequest request{args->max_moves, args->cost_per_move, args->group_families, !args->costs_out.empty()};
     const ReslotPlan plan = plan_reslot(project->store, project->units, ro, request);
     if (!plan.problems.empty()) {

@@ -8,6 +8,7 @@
 #include "engine/caution.hpp"
 #include "engine/io/json_writer.hpp"
 #include "engine/io/review_output.hpp"
+#include "engine/io/text_columns.hpp"
 #include "engine/version.hpp"
 
 namespace rackreach {
@@ -146,14 +147,9 @@ void write_job(JsonWriter& w, const LiftJob& job, const JobAssessment& ja, const
   w.end_object();
 }
 
-std::string fixed(double x, int decimals) {
-  char buf[48];
-  std::snprintf(buf, sizeof buf, "%.*f", decimals, x);
-  return buf;
-}
-
-std::string pad_left(const std::string& s, std::size_t w) { return s.size() >= w ? s : std::string(w - s.size(), ' ') + s; }
-std::string pad_right(const std::string& s, std::size_t w) { return s.size() >= w ? s : s + std::string(w - s.size(), ' '); }
+using text::fixed;
+using text::pad_left;
+using text::pad_right;
 
 }  // namespace
 

@@ -6,19 +6,16 @@
 
 #include "engine/caution.hpp"
 #include "engine/io/assessment_output.hpp"
+#include "engine/io/text_columns.hpp"
 #include "engine/version.hpp"
 
 namespace rackreach {
 namespace {
 
-std::string fixed(double x, int decimals) {
-  char buf[48];
-  std::snprintf(buf, sizeof buf, "%.*f", decimals, x);
-  return buf;
-}
-std::string ofixed(const std::optional<double>& x, int decimals) { return x ? fixed(*x, decimals) : "-"; }
-std::string pad_left(const std::string& s, std::size_t w) { return s.size() >= w ? s : std::string(w - s.size(), ' ') + s; }
-std::string pad_right(const std::string& s, std::size_t w) { return s.size() >= w ? s : s + std::string(w - s.size(), ' '); }
+using text::fixed;
+using text::pad_left;
+using text::pad_right;
+std::string ofixed(const std::optional<double>& x, int decimals) { return text::fixed_or_dash(x, decimals); }
 const char* position_name(SlotPosition p) { return p == SlotPosition::front ? "front" : "back"; }
 const char* family_pick_name(FamilyDecision::Pick p) {
   return p == FamilyDecision::Pick::hand ? "hand" : p == FamilyDecision::Pick::truck ? "truck" : "split";
