@@ -6,13 +6,48 @@
 
 namespace rackreach {
 
-std::filesystem::path resolve_data_dir(const char* env_value) {
-  if (env_value != nullptr && *env_value != '\0') return env_value;
-  return RACKREACH_ANTHROPOMETRY_DATA_DIR;
+std::vector<DataDirCandidate> list_data_dir_candidates(const char* env_value, const std::filesystem::path& executable,
+                                                       const std::filesystem::path& build_tree_dir) {
+  if (env_value != nullptr && *env_value != '\0') return {{env_value, "RACKREACH_DATA_DIR"}};
+  std::vector<DataDirCandidate> out;
+  if (!executable.empty())
+    out.push_back({(executable.parent_path() / RACKREACH_INSTALLED_DATA_FROM_BINDIR).lexically_normal(),
+                   "installed, relative to the program " + executable.string()});
+  if (!build_tree_dir.empty()) out.push_back({build_tree_dir, "build tree"});
+  return out;
 }
 
-std::filesystem::path find_data_dir() {
-  return resolve_data_dir(std::getenv("RACKREACH_DATA_DIR"));
+DataDirLookup resolve_data_dir(const char* env_value, const std::filesystem::path& executable,
+                               const std::filesystem::path& build_tree_dir) {
+  DataDirLookup out;
+  out.tried = list_data_dir_candidates(env_value, executable, build_tree_dir);
+  for (const DataDirCandidate& c : out.tried) {
+    if (!list_population_files(c.dir).empty()) {
+      out.dir = c.dir;
+      out.reason = c.reason;
+      break;
+    }
+  }
+  return out;
+}
+
+std::string DataDirLookup::failure_message() const {
+  std::string out = "no population tables (*.json) found; looked in: ";
+  for (std::size_t i = 0; i < tried.size(); ++i)
+    out += (i ? "; " : "") + tried[i].dir.string() + " (" + tried[i].reason + ")";
+  if (tried.empty()) out += "nowhere (the program's own path is unknown)";
+  return out + ". Set RACKREACH_DATA_DIR to the folder that holds them (installed: share/rackreach/population)";
+}
+
+std::filesystem::path find_executable_path() {
+  std::error_code ec;
+  std::filesystem::path exe = std::filesystem::read_symlink("/proc/self/exe", ec);
+  return ec ? std::filesystem::path() : exe;
+}
+
+DataDirLookup find_data_dir() {
+  return resolve_data_dir(std::getenv("RACKREACH_DATA_DIR"), find_executable_path(),
+                          RACKREACH_ANTHROPOMETRY_DATA_DIR);
 }
 
 std::vector<std::filesystem::path> list_population_files(const std::filesystem::path& dir) {

@@ -2,9 +2,13 @@
 #pragma once
 // Where the shipped population tables are, and loading a table or a workforce by name.
 //
-// The data directory is the environment variable RACKREACH_DATA_DIR when it is set and not empty, else the
-// directory compiled in for the build tree (the repository's anthropometry/data). This is the only place that
-// decides it.
+// The data folder is looked for in this order, and this is the only place that decides it:
+//   1. the environment variable RACKREACH_DATA_DIR, when it is set and not empty (then it is the only place
+//      looked: a folder named on purpose is never silently replaced by another);
+//   2. relative to the running program (/proc/self/exe): ../share/rackreach/population from its bin folder, the
+//      installed layout wherever the prefix is (/usr/local, a .deb's /usr, a moved or extracted copy);
+//   3. the repository's anthropometry/data, compiled in for running from the build tree.
+// A folder counts when it holds at least one population table (*.json).
 
 #include <filesystem>
 #include <memory>
@@ -22,10 +26,31 @@ namespace rackreach {
 /// table that estimates it (ANSUR II estimates it from seated overhead reach, see its data file).
 inline constexpr std::string_view measured_overhead_reach_table = "ansur1988";
 
-/// `env_value` if it is set and not empty, else the compiled-in directory.
-std::filesystem::path resolve_data_dir(const char* env_value);
-/// resolve_data_dir(getenv("RACKREACH_DATA_DIR")).
-std::filesystem::path find_data_dir();
+/// One place the data folder may be, and why it is looked at.
+struct DataDirCandidate {
+  std::filesystem::path dir;
+  std::string reason;  ///< "RACKREACH_DATA_DIR", "installed beside the program", "build tree"
+};
+
+struct DataDirLookup {
+  std::optional<std::filesystem::path> dir;  ///< the first candidate that holds population tables
+  std::string reason;                        ///< the found candidate's reason
+  std::vector<DataDirCandidate> tried;       ///< every candidate, in the order looked at
+  /// "no population tables (*.json) found; looked in: A (reason), B (reason); ..." naming every place tried.
+  std::string failure_message() const;
+};
+
+/// The candidates in lookup order. `env_value` is RACKREACH_DATA_DIR (nullptr when unset); `executable` the
+/// running program's path (empty when unknown); `build_tree_dir` the compiled-in repository folder.
+std::vector<DataDirCandidate> list_data_dir_candidates(const char* env_value, const std::filesystem::path& executable,
+                                                       const std::filesystem::path& build_tree_dir);
+/// The first candidate that holds population tables.
+DataDirLookup resolve_data_dir(const char* env_value, const std::filesystem::path& executable,
+                               const std::filesystem::path& build_tree_dir);
+/// The running program's own path (/proc/self/exe), or empty when it cannot be read.
+std::filesystem::path find_executable_path();
+/// resolve_data_dir(getenv("RACKREACH_DATA_DIR"), find_executable_path(), the compiled-in build-tree folder).
+DataDirLookup find_data_dir();
 
 /// The population table files (*.json) in `dir`, sorted by name.
 std::vector<std::filesystem::path> list_population_files(const std::filesystem::path& dir);

@@ -26,7 +26,16 @@ std::optional<Project> load_or_report(const std::string& file, int& exit_code) {
 }
 
 std::optional<ReachSetup> load_reach_or_report(const std::string& file, const Project& project, int& exit_code) {
-  LoadedReachSetup reach = load_reach_setup(project, find_data_dir());
+  const DataDirLookup data = find_data_dir();
+  if (!data.dir && is_shipped_name(project.workforce.population)) {
+    print_problems(file, {{"file_error", project.workforce_given ? "workforce.population" : "", "",
+                           "the reach checks need the population table \"" + project.workforce.population +
+                               "\": " + data.failure_message(),
+                           ""}});
+    exit_code = exit_invalid_input;
+    return std::nullopt;
+  }
+  LoadedReachSetup reach = load_reach_setup(project, data.dir.value_or(std::filesystem::path()));
   if (!reach.setup) {
     print_problems(file, reach.problems);
     exit_code = exit_invalid_input;

@@ -6,13 +6,15 @@
 
 #include "app/cli/commands.hpp"
 #include "app/cli/population_cmd.hpp"
-#include "engine/version.hpp"
+#include "app/about/about.hpp"
 
 int main(int argc, char** argv) {
   CLI::App app{"Rackreach: screens the lifts and reaches of rack slots and lift jobs with the Revised NIOSH Lifting "
                "Equation. Results support, and do not replace, a qualified ergonomics professional."};
   app.name("rackreach");
-  app.set_version_flag("--version", std::string("rackreach ") + rackreach::engine_version);
+  app.set_version_flag("--version", [] { return rackreach::make_version_text("rackreach"); },
+                       "Print the version and build information (commit, compiler, build type, Qt, data folder) "
+                       "and exit");
   app.require_subcommand(1);
   int exit_code = rackreach::cli::exit_ok;
   rackreach::cli::add_assess_command(app, exit_code);

@@ -32,13 +32,13 @@ void print_input_problems(const std::vector<Problem>& problems) {
 }
 
 int run_list() {
-  const auto dir = find_data_dir();
-  const auto files = list_population_files(dir);
-  if (files.empty()) {
-    std::cerr << dir.string() << ": no population tables (*.json) found; set RACKREACH_DATA_DIR to the folder "
-              << "that holds them\n";
+  const DataDirLookup data = find_data_dir();
+  if (!data.dir) {
+    std::cerr << "rackreach: " << data.failure_message() << "\n";
     return exit_invalid_input;
   }
+  const std::filesystem::path& dir = *data.dir;
+  const auto files = list_population_files(dir);
   std::cout << "Population tables in " << dir.string() << "\n\n";
   int code = exit_ok;
   for (const auto& file : files) {
@@ -72,7 +72,12 @@ int run_show(const std::string& name, const std::string& mix_text, const std::ve
       return exit_usage;
     }
   }
-  const auto dir = find_data_dir();
+  const DataDirLookup data = find_data_dir();
+  if (!data.dir && is_shipped_name(name)) {
+    std::cerr << "rackreach: " << data.failure_message() << "\n";
+    return exit_invalid_input;
+  }
+  const std::filesystem::path dir = data.dir.value_or(std::filesystem::path());
   // The table is shown as it is; load_workforce with the overhead preference only tells what reach checks use.
   const LoadedWorkforce loaded = load_workforce(name, *mix, dir, false);
   if (!loaded.workforce) {

@@ -1,5 +1,6 @@
 // SPDX-License-Identifier: MIT
 // rackreach-gui [PROJECT]
+// rackreach-gui --version
 // rackreach-gui --screenshot OUT.png [--select SLOT] [--units file|metric|us] PROJECT   (renders offscreen, exits)
 
 #include <QApplication>
@@ -9,6 +10,7 @@
 #include <cstring>
 #include <string>
 
+#include "app/about/about.hpp"
 #include "app/gui/main_window.hpp"
 #include "app/gui/screenshot.hpp"
 
@@ -28,7 +30,11 @@ int main(int argc, char** argv) {
       units = *c;
     } else if (a == "--help" || a == "-h") {
       std::puts("usage: rackreach-gui [PROJECT]\n"
-                "       rackreach-gui --screenshot OUT.png [--select SLOT] [--units file|metric|us] PROJECT");
+                "       rackreach-gui --screenshot OUT.png [--select SLOT] [--units file|metric|us] PROJECT\n"
+                "       rackreach-gui --version");
+      return 0;
+    } else if (a == "--version") {
+      std::puts(rackreach::make_version_text("rackreach-gui").c_str());
       return 0;
     } else if (!a.empty() && a[0] == '-' && a.rfind("-platform", 0) != 0) {
       std::fprintf(stderr, "rackreach-gui: unknown option %s\n", a.c_str());

@@ -60,7 +60,12 @@ void ProjectModel::load_reach() {
   reach_.reset();
   assess_problems_.clear();
   if (!project_.has_shelf_geometry()) return;
-  LoadedReachSetup r = load_reach_setup(project_, find_data_dir());
+  const DataDirLookup data = find_data_dir();
+  if (!data.dir && is_shipped_name(project_.workforce.population)) {
+    assess_problems_.push_back({"file_error", "", "", data.failure_message(), ""});
+    return;
+  }
+  LoadedReachSetup r = load_reach_setup(project_, data.dir.value_or(std::filesystem::path()));
   reach_ = std::move(r.setup);
   assess_problems_ = std::move(r.problems);
 }

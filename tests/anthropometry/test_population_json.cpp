@@ -3,6 +3,8 @@
 // citation; every fault is reported with file, JSON path, value and rule.
 
 #include <catch2/catch.hpp>
+#include <cstdlib>
+#include <filesystem>
 #include <fstream>
 #include <sstream>
 
@@ -127,11 +129,65 @@ TEST_CASE("invalid population tables: each problem names the path, the value and
   }
 }
 
-TEST_CASE("data directory: the environment override wins, else the build tree's folder", "[anthropometry][file]") {
-  CHECK(rackreach::resolve_data_dir("/opt/tables") == std::filesystem::path("/opt/tables"));
-  CHECK(std::filesystem::equivalent(rackreach::resolve_data_dir(nullptr), shipped::data_dir()));
-  CHECK(std::filesystem::equivalent(rackreach::resolve_data_dir(""), shipped::data_dir()));
-  const auto files = rackreach::list_population_files(shipped::data_dir());
+TEST_CASE("data directory: the environment override wins, then beside the program, then the build tree",
+          "[anthropometry][file]") {
+  namespace fs = std::filesystem;
+  const fs::path build_tree = shipped::data_dir();
+  // An installed tree of our own: PREFIX/bin/rackreach and PREFIX/share/rackreach/population/*.json.
+  const fs::path prefix = fs::temp_directory_path() / "rackreach-data-dir-test";
+  fs::remove_all(prefix);
+  fs::create_directories(prefix / "bin");
+  fs::create_directories(prefix / "share/rackreach/population");
+  fs::copy_file(build_tree / "ansur2.json", prefix / "share/rackreach/population/ansur2.json");
+  const fs::path exe = prefix / "bin/rackreach";
+
+  SECTION("the environment variable is the only place looked at when set, even if empty of tables") {
+    const rackreach::DataDirLookup found = rackreach::resolve_data_dir(build_tree.c_str(), exe, build_tree);
+    REQUIRE(found.dir);
+    CHECK(*found.dir == build_tree);
+    CHECK(found.reason == "RACKREACH_DATA_DIR");
+    const rackreach::DataDirLookup missing = rackreach::resolve_data_dir("/nonexistent/tables", exe, build_tree);
+    CHECK_FALSE(missing.dir);
+    REQUIRE(missing.tried.size() == 1);
+    CHECK_THAT(missing.failure_message(), Catch::Matchers::Contains("/nonexistent/tables (RACKREACH_DATA_DIR)"));
+  }
+  SECTION("unset or empty: the installed folder relative to the program comes first") {
+    for (const char* env : {static_cast<const char*>(nullptr), ""}) {
+      const rackreach::DataDirLookup found = rackreach::resolve_data_dir(env, exe, build_tree);
+      REQUIRE(found.dir);
+      CHECK(fs::equivalent(*found.dir, prefix / "share/rackreach/population"));
+      CHECK_THAT(found.reason, Catch::Matchers::StartsWith("installed"));
+    }
+  }
+  SECTION("no installed folder: the build tree") {
+    const rackreach::DataDirLookup found = rackreach::resolve_data_dir(nullptr, "/nonexistent/bin/rackreach", build_tree);
+    REQUIRE(found.dir);
+    CHECK(*found.dir == build_tree);
+    CHECK(found.reason == "build tree");
+  }
+  SECTION("nowhere: the message names every place tried, in order") {
+    const rackreach::DataDirLookup none =
+        rackreach::resolve_data_dir(nullptr, "/nonexistent/bin/rackreach", "/nonexistent/src/anthropometry/data");
+    CHECK_FALSE(none.dir);
+    REQUIRE(none.tried.size() == 2);
+    const std::string m = none.failure_message();
+    const auto installed = m.find("/nonexistent/share/rackreach/population");
+    const auto tree = m.find("/nonexistent/src/anthropometry/data (build tree)");
+    CHECK(installed != std::string::npos);
+    CHECK(tree != std::string::npos);
+    CHECK(installed < tree);
+    CHECK_THAT(m, Catch::Matchers::Contains("RACKREACH_DATA_DIR"));
+  }
+  SECTION("the running program finds the build tree's tables (tests run from the build folder)") {
+    const rackreach::DataDirLookup here = rackreach::find_data_dir();
+    if (std::getenv("RACKREACH_DATA_DIR") == nullptr) {
+      REQUIRE(here.dir);
+      CHECK(fs::equivalent(*here.dir, build_tree));
+    }
+    CHECK(rackreach::find_executable_path().filename() == "test_anthropometry");
+  }
+  fs::remove_all(prefix);
+  const auto files = rackreach::list_population_files(build_tree);
   REQUIRE(files.size() == 2);
   CHECK(files[0].filename() == "ansur1988.json");
   CHECK(files[1].filename() == "ansur2.json");
