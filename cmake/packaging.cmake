@@ -16,9 +16,13 @@ set(CPACK_DEBIAN_PACKAGE_SECTION science)
 set(CPACK_DEBIAN_PACKAGE_PRIORITY optional)
 set(CPACK_DEBIAN_PACKAGE_SHLIBDEPS ON)
 set(CPACK_DEBIAN_PACKAGE_SUGGESTS bash-completion)
+if(RACKREACH_GUI)
+  # The desktop app needs a Qt platform plugin (xcb, wayland) to open a window; the CLI does not.
+  set(CPACK_DEBIAN_PACKAGE_RECOMMENDS qt6-qpa-plugins)
+endif()
+# The Description's first line is CPACK_PACKAGE_DESCRIPTION_SUMMARY; this is the long text below it.
 set(CPACK_DEBIAN_PACKAGE_DESCRIPTION
-    "${PROJECT_DESCRIPTION}
-Rackreach screens the picks of a picking or kitting store for lifting and reach
+    "Rackreach screens the picks of a picking or kitting store for lifting and reach
 risk: from the rack layout, the parts and the demand it derives the lift every
 slot causes and evaluates it with the Revised NIOSH Lifting Equation (RWL, LI,
 CLI, VLI) and with reach checks for a workforce drawn from anthropometric survey
