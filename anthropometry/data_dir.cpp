@@ -46,8 +46,7 @@ std::filesystem::path find_executable_path() {
 }
 
 DataDirLookup find_data_dir() {
-  return resolve_data_dir(std::getenv("RACKREACH_DATA_DIR"), find_executable_path(),
-                          RACKREACH_ANTHROPOMETRY_DATA_DIR);
+  return resolve_data_dir(std::getenv("RACKREACH_DATA_DIR"), find_executable_path(), RACKREACH_ANTHROPOMETRY_DATA_DIR);
 }
 
 std::vector<std::filesystem::path> list_population_files(const std::filesystem::path& dir) {

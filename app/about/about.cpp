@@ -13,8 +13,10 @@ std::string make_version_text(std::string_view program) {
   out += std::string("build type:  ") + build_info::build_type + "\n";
   out += std::string("Qt:          ") + build_info::qt + "\n";
   const DataDirLookup data = find_data_dir();
-  if (data.dir) out += "data folder: " + data.dir->string() + " (" + data.reason + ")\n";
-  else out += "data folder: none: " + data.failure_message() + "\n";
+  if (data.dir)
+    out += "data folder: " + data.dir->string() + " (" + data.reason + ")\n";
+  else
+    out += "data folder: none: " + data.failure_message() + "\n";
   out.pop_back();  // the callers end the last line
   return out;
 }

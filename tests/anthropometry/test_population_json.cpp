@@ -160,7 +160,8 @@ TEST_CASE("data directory: the environment override wins, then beside the progra
     }
   }
   SECTION("no installed folder: the build tree") {
-    const rackreach::DataDirLookup found = rackreach::resolve_data_dir(nullptr, "/nonexistent/bin/rackreach", build_tree);
+    const rackreach::DataDirLookup found =
+        rackreach::resolve_data_dir(nullptr, "/nonexistent/bin/rackreach", build_tree);
     REQUIRE(found.dir);
     CHECK(*found.dir == build_tree);
     CHECK(found.reason == "build tree");

@@ -5,7 +5,7 @@ headers, libraries, tests or tools), and the installed CLI, run with RACKREACH_D
 environment, finds its population tables relative to itself, also after the whole prefix is moved elsewhere
 (as a .deb puts it in /usr), and reviews an installed sample exactly as the build tree's CLI does.
 
-  check_install.py --build BUILD --work TMPDIR --gui ON|OFF --cli BUILD_CLI --repo SOURCE
+  check_install.py --build BUILD --work TMPDIR --gui ON|OFF --cli BUILD_CLI --repo SOURCE [--cmake CMAKE]
 """
 import argparse
 import json
@@ -25,7 +25,7 @@ FILES = (["bin/rackreach",
           "share/bash-completion/completions/rackreach",
           "share/doc/rackreach/README.md", "share/doc/rackreach/anthropometry.md"]
          + [f"share/rackreach/samples/{s}" for s in SAMPLES])
-GUI_FILES = ["bin/rackreach-gui", "share/applications/rackreach-gui.desktop",
+GUI_FILES = ["bin/rackreach-gui", "share/man/man1/rackreach-gui.1.gz", "share/applications/rackreach-gui.desktop",
              "share/icons/hicolor/scalable/apps/rackreach.svg"]
 
 
@@ -48,13 +48,14 @@ def main():
     ap.add_argument("--gui", choices=["ON", "OFF"], required=True)
     ap.add_argument("--cli", required=True, help="the build tree's rackreach, for the reference review")
     ap.add_argument("--repo", required=True)
+    ap.add_argument("--cmake", default="cmake")
     a = ap.parse_args()
     failures = []
     work = Path(a.work)
     shutil.rmtree(work, ignore_errors=True)
     work.mkdir(parents=True)
     prefix = work / "prefix"
-    r = run(["cmake", "--install", a.build, "--prefix", prefix])
+    r = run([a.cmake, "--install", a.build, "--prefix", prefix])
     if r.returncode != 0:
         print(f"FAIL: cmake --install exited {r.returncode}:\n{r.stdout}\n{r.stderr}")
         return 1
@@ -112,9 +113,9 @@ def main():
     moved.parent.mkdir()
     prefix.rename(moved)  # a relocated prefix, as a package or an unpacked archive puts it
     check_prefix(moved)
-    r = run(["gzip", "-t", moved / "share/man/man1/rackreach.1.gz"])
-    if r.returncode != 0:
-        failures.append("the installed manual page is not a valid gzip file")
+    for page in sorted(f for f in expected if f.startswith("share/man/")):
+        if run(["gzip", "-t", moved / page]).returncode != 0:
+            failures.append(f"{page} is not a valid gzip file")
 
     for f in failures:
         print("FAIL:", f)
