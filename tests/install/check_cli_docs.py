@@ -156,6 +156,12 @@ def check_completion(a, tree, subs, failures):
         n += 1
         if expect not in got:
             failures.append(f"completion of `{' '.join(words)}` lacks {expect} (offers {sorted(got)})")
+    # --option=value: bash splits the word at '='.
+    for words in (["rackreach", "assess", "--format", "=", ""], ["rackreach", "assess", "--format", "="]):
+        got = complete(a, words, cwd)
+        n += 1
+        if got != set(tree["assess"]["--format"]):
+            failures.append(f"completion of `{' '.join(words)}` offers {sorted(got)}")
     got = complete(a, ["rackreach", "assess", "sample_tasks/kitting"], cwd)
     if any(not g.endswith(".json") and not os.path.isdir(os.path.join(cwd, g)) for g in got):
         failures.append(f"a project file completion offers a file that is not *.json: {sorted(got)}")

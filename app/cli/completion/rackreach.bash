@@ -30,6 +30,13 @@ _rackreach_population_names() {  # shipped tables beside the rackreach on PATH, 
 _rackreach() {
   local cur=${COMP_WORDS[COMP_CWORD]} prev=""
   ((COMP_CWORD > 0)) && prev=${COMP_WORDS[COMP_CWORD - 1]}
+  # --format=json: bash splits at '=', so the option is the word before it.
+  if [[ $prev == "=" ]] && ((COMP_CWORD > 1)); then
+    prev=${COMP_WORDS[COMP_CWORD - 2]}
+  elif [[ $cur == "=" ]] && ((COMP_CWORD > 0)); then
+    prev=${COMP_WORDS[COMP_CWORD - 1]}
+    cur=""
+  fi
   COMPREPLY=()
 
   # The subcommand (and population's own subcommand) is the first word that names one.
