@@ -591,6 +591,7 @@ class Builder {
         "standing, unrestricted lifting of stable loads at moderate speed, with carrying or pushing a small share of "
         "the work, good floor friction and moderate climate, at most 8 h. For each task: what the file states, the "
         "limits it is outside (the equation may underestimate its risk there), and every other warning."});
+    s.blocks.push_back(Subheading{"Conditions stated in the file"});
     Table st;
     st.header = {"Task or zone", "Conditions stated (limits of application)"};
     st.widths_pct = {20, 80};
@@ -600,6 +601,7 @@ class Builder {
       for (const LiftTask& t : j.tasks) st.rows.push_back({c("job " + j.id + ", task " + t.id), c(limits_stated_text(t.limits))});
     s.blocks.push_back(std::move(st));
 
+    s.blocks.push_back(Subheading{"Warnings, task by task"});
     Table t;
     t.header = {"Task", "Within the limits of application", "Outside the limits", "Other warnings"};
     t.widths_pct = {14, 14, 30, 42};

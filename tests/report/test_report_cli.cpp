@@ -56,6 +56,8 @@ Run run(const std::string& command) {
 Run run_cli(const std::string& args) { return run(quote(RACKREACH_CLI) + " " + args); }
 
 const std::string demo = shared_reference::repo_path("sample_tasks/kitting-store.rackreach.json");
+
+#ifdef RACKREACH_HAVE_REPORT
 const std::string plain = shared_reference::repo_path("sample_tasks/kit-cart-loading.rackreach.json");
 
 /// Runs of white space made one space: pdftotext breaks lines where the page does.
@@ -116,6 +118,8 @@ void check_demo_content(const std::string& text) {
   CHECK_THAT(t, Catch::Matchers::Contains("Level limits"));
   CHECK_THAT(t, Catch::Matchers::Contains("Rackreach 0."));
 }
+
+#endif
 
 }  // namespace
 
