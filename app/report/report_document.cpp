@@ -263,6 +263,9 @@ class Builder {
       row("Comfortable reach", fixed(q.comfortable_reach_fraction * 100.0, 0) + " % of maximum reach",
           src("comfortable_reach_fraction"));
       row("Hand above grip axis", fixed(q.hand_above_grip_fraction_of_breadth, 2) + " x hand breadth", "default");
+    } else {
+      row("Reach checks", "none: no task has shelf geometry and the file has no slots, so no workforce was used",
+          "file");
     }
     if (a_.store) {
       const Store& st = p_.store;
@@ -449,7 +452,7 @@ class Builder {
                                  "number that decides it."});
     Table t;
     t.header = {"#", "Slot", "Part (family)", "Place", "Load", "V", "H", "F", "RWL", "LI", "Band", "Reach", "Remedies"};
-    t.widths_pct = {3, 8, 9, 7, 4, 4, 4, 4, 5, 4, 7, 11, 30};
+    t.widths_pct = {3, 8, 9, 7, 4, 4, 4, 4, 5, 4, 7, 14, 27};
     for (std::size_t i = 0; i < rv.findings.size(); ++i) {
       const SlotFinding& f = rv.findings[i];
       const Slot& sl = p_.store.slots[f.slot_index];
