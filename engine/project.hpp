@@ -60,6 +60,7 @@ struct ProjectInfo {
   std::optional<std::string> assessor;
   std::optional<std::string> date;
   std::optional<std::string> title;
+  std::optional<std::string> revision;  ///< the assessment's revision, as the site numbers them (e.g. "B")
 };
 
 struct Project {

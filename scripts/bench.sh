@@ -21,3 +21,8 @@ ls -l "$work/store-100k.rackreach.json" | awk '{print "store input bytes:", $5}'
   ./build/app/cli/rackreach check "$work/store-100k.rackreach.json"
 /usr/bin/time -f "store review (assess --format json): %e s wall, %M KB peak" \
   ./build/app/cli/rackreach assess "$work/store-100k.rackreach.json" --format json --out "$work/store-out.json"
+# The audit report of the demo store, end to end (load, assess, self-check, drawings, layout, write).
+for format in pdf html; do
+  /usr/bin/time -f "report --out .$format (demo store): %e s wall, %M KB peak" \
+    ./build/app/cli/rackreach report sample_tasks/kitting-store.rackreach.json --out "$work/report.$format" --date 2026-12-01
+done

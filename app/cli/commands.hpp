@@ -23,6 +23,7 @@ void add_limits_command(CLI::App& app, int& exit_code);
 void add_import_command(CLI::App& app, int& exit_code);
 void add_export_csv_command(CLI::App& app, int& exit_code);
 void add_reslot_command(CLI::App& app, int& exit_code);
+void add_report_command(CLI::App& app, int& exit_code);
 
 /// Loads a project file; on problems prints them, sets exit code 1 and returns nothing.
 std::optional<Project> load_or_report(const std::string& file, int& exit_code);

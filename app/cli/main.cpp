@@ -24,6 +24,7 @@ int main(int argc, char** argv) {
   rackreach::cli::add_import_command(app, exit_code);
   rackreach::cli::add_export_csv_command(app, exit_code);
   rackreach::cli::add_reslot_command(app, exit_code);
+  rackreach::cli::add_report_command(app, exit_code);
   rackreach::cli::add_population_command(app, exit_code);
   try {
     app.parse(argc, argv);

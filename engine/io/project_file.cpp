@@ -108,8 +108,8 @@ class ProjectLoader {
   std::optional<Project> finish(const json& doc, bool jobs_streamed) {
     const JsonPath root;
     if (!r_.object(doc, root,
-                   {"rackreach", "units", "title", "site", "assessor", "date", "duration_rule", "workforce",
-                    "reach_parameters", "jobs", "shift", "demand", "zones", "racks", "parts", "slots", "routes",
+                   {"rackreach", "units", "title", "site", "assessor", "date", "revision", "duration_rule",
+                    "workforce", "reach_parameters", "jobs", "shift", "demand", "zones", "racks", "parts", "slots", "routes",
                     "reference_box", "limit_frequencies"}))
       return std::nullopt;
     Project p;
@@ -125,6 +125,7 @@ class ProjectLoader {
     p.info.site = r_.string(doc, root, "site", false);
     p.info.assessor = r_.string(doc, root, "assessor", false);
     p.info.date = read_date(doc, root);
+    p.info.revision = r_.string(doc, root, "revision", false);
     if (auto rule = r_.choice(doc, root, "duration_rule", false, {"2021", "1994"}))
       p.duration_rule = *find_duration_rule(*rule);
     if (const json* w = r_.member(doc, root, "workforce", false)) load_workforce_spec(*w, JsonPath(root, "workforce"), p);

@@ -188,6 +188,7 @@ std::string save_project_text(const Project& p) {
   if (p.info.site) root["site"] = *p.info.site;
   if (p.info.assessor) root["assessor"] = *p.info.assessor;
   if (p.info.date) root["date"] = *p.info.date;
+  if (p.info.revision) root["revision"] = *p.info.revision;
   root["duration_rule"] = std::string(duration_rule_name(p.duration_rule));
   if (p.workforce_given)
     root["workforce"] = {{"population", p.workforce.population},

@@ -1,10 +1,10 @@
 // SPDX-License-Identifier: MIT
-#include "app/gui/band_palette.hpp"
+#include "app/drawing/band_palette.hpp"
 
 #include <array>
 #include <cmath>
 
-namespace rackreach::gui {
+namespace rackreach::drawing {
 namespace {
 
 // cividis at 0, 0.25, 0.5, 0.75 and 1 (the published colormap's values, rounded to 8-bit sRGB); between the
@@ -44,4 +44,4 @@ QBrush band_brush(RiskBand band) {
   return QBrush(band_colour(band));
 }
 
-}  // namespace rackreach::gui
+}  // namespace rackreach::drawing
