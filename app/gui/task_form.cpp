@@ -321,6 +321,7 @@ void TaskForm::load_task(std::size_t job, std::size_t task) {
   edits_["load"]->setText(q(f.load));
   edits_["max_load"]->setText(q(f.max_load));
   edits_["frequency"]->setText(q(f.frequency));
+  loaded_frequency_ = q(f.frequency);
   if (duration_->findData("pattern") < 0 && f.duration == "pattern") duration_->addItem(tr("from the job's work pattern"), "pattern");
   duration_->setCurrentIndex(duration_->findData(q(f.duration)));
   coupling_->setCurrentIndex(coupling_->findData(q(f.coupling)));
@@ -367,7 +368,16 @@ void TaskForm::apply(bool as_new) {
   }
   LiftJob job = jobs[editing_->first];
   if (editing_->second >= job.tasks.size()) return;
-  job.tasks[editing_->second] = task;  // the task's shelf and sample details stay as they were
+  const std::size_t t = editing_->second;
+  job.tasks[t] = task;  // the task's shelf details stay as they were
+  // F given as a sample (lifts per minute over part of a sample period) stays a sample unless F itself was
+  // retyped; then the typed F is the task's and the sample no longer says where it came from.
+  if (t < job.details.size() && job.details[t].frequency_sample) {
+    if (edits_.at("frequency")->text().trimmed() != loaded_frequency_.trimmed())
+      job.details[t].frequency_sample.reset();
+    else
+      job.tasks[t].frequency_per_min = jobs[editing_->first].tasks[t].frequency_per_min;
+  }
   if (check_.job->declared_duration) {
     job.declared_duration = check_.job->declared_duration;
     job.work_pattern.clear();

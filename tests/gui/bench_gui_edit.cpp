@@ -14,6 +14,7 @@
 #include "app/gui/edit_commands.hpp"
 #include "app/gui/main_window.hpp"
 #include "app/gui/rack_view.hpp"
+#include "app/gui/store_tables.hpp"
 
 int main(int argc, char** argv) {
   if (argc < 2) {
@@ -62,7 +63,38 @@ int main(int argc, char** argv) {
     const rackreach::ProjectAssessment a = rackreach::assess_project(m.project(), options);
     engine_ms.push_back(t.nsecsElapsed() / 1e6);
   }
+  // The kept review's share: StoreReviewer::update after one part edit, on the same project.
+  std::vector<double> update_ms;
+  {
+    rackreach::AssessOptions options;
+    options.reach = m.reach();
+    rackreach::Project project = m.project();
+    rackreach::StoreReviewer reviewer(project.units, rackreach::make_review_options(options, project.duration_rule));
+    rackreach::StoreReview review = reviewer.review(project.store);
+    for (int i = 0; i < repeats; ++i) {
+      project.store.parts.at(0).unit_weight *= (i % 2 ? 0.5 : 2.0);
+      QElapsedTimer t;
+      t.start();
+      reviewer.update(review, project.store, {{rackreach::StoreEdit::Kind::part, 0}});
+      update_ms.push_back(t.nsecsElapsed() / 1e6);
+    }
+  }
+  // A slot edit: the parts of two slots swapped (drag-to-swap), edit to repainted window.
+  std::vector<double> swap_ms;
+  {
+    rackreach::gui::SlotsTableModel slots(m);
+    for (int i = 0; i < repeats; ++i) {
+      QElapsedTimer t;
+      t.start();
+      slots.swap_parts(0, m.project().store.slots.size() / 2);
+      const QPixmap px = w.grab();
+      swap_ms.push_back(t.nsecsElapsed() / 1e6);
+    }
+  }
   std::printf("assess_project alone:                 median %.1f ms\n", median(engine_ms));
+  std::printf("StoreReviewer::update alone (part):   median %.2f ms\n", median(update_ms));
+  std::printf("swap two slots' parts to repainted:   median %.1f ms (min %.1f, max %.1f)\n", median(swap_ms),
+              *std::min_element(swap_ms.begin(), swap_ms.end()), *std::max_element(swap_ms.begin(), swap_ms.end()));
   std::printf("edit -> reassessed and models reset: median %.1f ms\n", median(edit_ms));
   std::printf("repaint of the window (1280x800):     median %.1f ms\n", median(paint_ms));
   std::printf("edit to repainted window:             median %.1f ms (min %.1f, max %.1f) over %d edits\n",
