@@ -384,50 +384,67 @@ void MainWindow::select_slot(std::optional<std::size_t> slot_index) {
 void MainWindow::refresh_lists() {
   const Store& store = model_.project().store;
   {
+    // The rack list is made again only when the racks changed (not after every edit of a part or slot).
+    QStringList labels;
+    for (const Rack& r : store.racks) labels << tr("%1 (%2 levels)").arg(q(r.id)).arg(r.levels.size());
+    bool same = labels.size() == rack_list_->count();
+    for (int i = 0; same && i < labels.size(); ++i) same = rack_list_->item(i)->text() == labels[i];
     const QSignalBlocker b(rack_list_);
     const int cur = rack_list_->currentRow();
-    rack_list_->clear();
-    for (const Rack& r : store.racks)
-      rack_list_->addItem(tr("%1 (%2 levels)").arg(q(r.id)).arg(r.levels.size()));
+    if (!same) {
+      rack_list_->clear();
+      rack_list_->addItems(labels);
+    }
     rack_list_->setCurrentRow(cur >= 0 && cur < rack_list_->count() ? cur : (rack_list_->count() ? 0 : -1));
     rack_view_->set_rack(rack_list_->currentRow());
   }
-  auto refill = [](QComboBox* box, const std::set<QString>& items) {
+  // The filters' choices: filled again (and the filter applied again) only when they changed.
+  bool filters_changed = false;
+  auto refill = [&filters_changed](QComboBox* box, const std::set<std::string>& items) {
+    bool same = box->count() == static_cast<int>(items.size()) + 1;
+    int i = 1;
+    for (auto it = items.begin(); same && it != items.end(); ++it, ++i) same = box->itemData(i).toString() == q(*it);
+    if (same) return;
     const QSignalBlocker b(box);
     const QString cur = box->currentData().toString();
     box->clear();
     box->addItem(tr("any"), QString());
-    for (const QString& s : items) box->addItem(s, s);
-    const int i = box->findData(cur);
-    box->setCurrentIndex(i >= 0 ? i : 0);
+    for (const std::string& s : items) box->addItem(q(s), q(s));
+    const int k = box->findData(cur);
+    box->setCurrentIndex(k >= 0 ? k : 0);
+    filters_changed = filters_changed || box->currentData().toString() != cur;
   };
-  std::set<QString> families, racks, remedies;
-  const QStringList bands = {"within limit", "elevated", "high", "very high", "outside equation", "truck level"};
-  if (const StoreReview* r = model_.review())
-    for (const SlotFinding& f : r->findings) {
-      families.insert(q(f.family));
-      racks.insert(q(f.rack_id));
-      for (const Remedy& m : f.remedies) remedies.insert(QString::fromUtf8(remedy_name(m.kind)));
-    }
-  {
-    const QSignalBlocker b(band_filter_);
-    if (band_filter_->count() == 0) {
-      band_filter_->addItem(tr("any"), QString());
-      for (const QString& s : bands) band_filter_->addItem(s, s);
-    }
-  }
-  refill(family_filter_, families);
-  refill(rack_filter_, racks);
-  refill(remedy_filter_, remedies);
-  apply_filter();
-  // One line of figures under the rack list.
+  std::set<std::string> families, racks, remedies;
+  std::vector<bool> remedy_seen(static_cast<std::size_t>(RemedyKind::outside_scope) + 1, false);
+  int over = 0, outside = 0;
   if (const StoreReview* r = model_.review()) {
-    int over = 0, outside = 0;
+    // Families and racks from the store (small records; a family with no slot shows no rows), remedies from the
+    // findings.
+    const std::string* last = nullptr;
+    for (const Part& p : store.parts)
+      if (!last || *last != p.family) families.insert(*(last = &p.family));
+    for (const Rack& k : store.racks) racks.insert(k.id);
     for (const SlotFinding& f : r->findings) {
+      for (const Remedy& m : f.remedies) remedy_seen[static_cast<std::size_t>(m.kind)] = true;
       if (f.truck_access) continue;
       if (f.band == RiskBand::outside_equation) ++outside;
       else if (f.band != RiskBand::within_limit) ++over;
     }
+  }
+  for (std::size_t k = 0; k < remedy_seen.size(); ++k)
+    if (remedy_seen[k]) remedies.insert(remedy_name(static_cast<RemedyKind>(k)));
+  if (band_filter_->count() == 0) {
+    const QSignalBlocker b(band_filter_);
+    band_filter_->addItem(tr("any"), QString());
+    for (const char* s : {"within limit", "elevated", "high", "very high", "outside equation", "truck level"})
+      band_filter_->addItem(QString::fromLatin1(s), QString::fromLatin1(s));
+  }
+  refill(family_filter_, families);
+  refill(rack_filter_, racks);
+  refill(remedy_filter_, remedies);
+  if (filters_changed) apply_filter();
+  // One line of figures under the rack list.
+  if (const StoreReview* r = model_.review()) {
     summary_->setText(tr("%1 slots: %2 above LI 1, %3 outside the equation").arg(r->findings.size()).arg(over).arg(outside));
   } else {
     summary_->setText(model_.project().jobs.empty() ? tr("No store.") : tr("%1 lift jobs, no store.").arg(model_.project().jobs.size()));

@@ -158,14 +158,28 @@ class Reviewer {
       slot_part_[i] = sl.part;
       slot_truck_[i] = truck;
     }
-    // The findings again, each put back at its place in the ranking (the ranking is a total order: see rank()).
-    std::erase_if(out.findings, [&](const SlotFinding& f) { return redo_slot[f.slot_index] != 0; });
+    // The findings again, each replaced where it is and moved to its place in the ranking (a total order, see
+    // ranks_before): only the findings between its old and new rank move. Many at once: sorted again instead.
     evaluated = 0;
-    for (std::size_t i = 0; i < redo_slot.size(); ++i) {
-      if (!redo_slot[i]) continue;
-      SlotFinding f = review_slot(i);
-      out.findings.insert(std::lower_bound(out.findings.begin(), out.findings.end(), f, ranks_before), std::move(f));
-      ++evaluated;
+    std::vector<std::size_t> at;  // rank of each finding to evaluate again
+    for (std::size_t k = 0; k < out.findings.size(); ++k)
+      if (redo_slot[out.findings[k].slot_index]) at.push_back(k);
+    evaluated = at.size();
+    if (at.size() > 64) {
+      for (std::size_t k : at) out.findings[k] = review_slot(out.findings[k].slot_index);
+      rank(out.findings);
+    } else {
+      std::vector<std::size_t> slots;
+      for (std::size_t k : at) slots.push_back(out.findings[k].slot_index);
+      for (std::size_t i : slots) {
+        const auto it = std::find_if(out.findings.begin(), out.findings.end(),
+                                     [i](const SlotFinding& f) { return f.slot_index == i; });
+        *it = review_slot(i);
+        if (it != out.findings.begin() && ranks_before(*it, *(it - 1)))
+          std::rotate(std::upper_bound(out.findings.begin(), it, *it, ranks_before), it, it + 1);
+        else if (it + 1 != out.findings.end() && ranks_before(*(it + 1), *it))
+          std::rotate(it, it + 1, std::lower_bound(it + 1, out.findings.end(), *it, ranks_before));
+      }
     }
     bool families = false;
     for (std::size_t p : redo_part) {

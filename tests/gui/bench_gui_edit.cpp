@@ -55,7 +55,7 @@ int main(int argc, char** argv) {
   };
   // The engine's share: assess_project alone on the same project and options.
   std::vector<double> engine_ms;
-  for (int i = 0; i < std::max(3, repeats / 3); ++i) {
+  for (int i = 0; i < std::clamp(repeats / 3, 3, 5); ++i) {
     rackreach::AssessOptions options;
     options.reach = m.reach();
     QElapsedTimer t;
