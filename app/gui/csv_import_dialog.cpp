@@ -30,19 +30,24 @@ void fill_choices(QComboBox* box, std::span<const CsvColumnSpec> specs, UnitSyst
     const QString name = QString::fromUtf8(s.name.data(), static_cast<int>(s.name.size()));
     const QString star = s.required ? QStringLiteral(" *") : QString();
     std::vector<const char*> suffixes;
-    if (s.kind == CsvValueKind::mass) suffixes = {"kg", "lb"};
-    else if (s.kind == CsvValueKind::length) suffixes = {"cm", "mm", "m", "in"};
-    else if (s.kind == CsvValueKind::angle) suffixes = {"deg"};
+    if (s.kind == CsvValueKind::mass)
+      suffixes = {"kg", "lb"};
+    else if (s.kind == CsvValueKind::length)
+      suffixes = {"cm", "mm", "m", "in"};
+    else if (s.kind == CsvValueKind::angle)
+      suffixes = {"deg"};
     if (suffixes.empty()) {
       box->addItem(name + star, name);
       continue;
     }
     if (s.kind != CsvValueKind::angle) {
-      const QString unit = s.kind == CsvValueKind::mass ? q(std::string(mass_unit(units))) : q(std::string(length_unit(units)));
+      const QString unit =
+          s.kind == CsvValueKind::mass ? q(std::string(mass_unit(units))) : q(std::string(length_unit(units)));
       box->addItem(QObject::tr("%1 in %2 (the project's unit)%3").arg(name, unit, star), name);
     }
     for (const char* u : suffixes)
-      box->addItem(QObject::tr("%1 in %2%3").arg(name, QString::fromLatin1(u), star), name + '_' + QString::fromLatin1(u));
+      box->addItem(QObject::tr("%1 in %2%3").arg(name, QString::fromLatin1(u), star),
+                   name + '_' + QString::fromLatin1(u));
   }
 }
 
@@ -129,9 +134,10 @@ QWidget* CsvImportDialog::make_page(Page& page, const QString& what) {
   }
   for (std::size_t r = 0; r < page.preview.rows.size(); ++r)
     for (std::size_t c = 0; c < page.preview.rows[r].cells.size() && c < page.preview.header.size(); ++c)
-      page.table->setItem(static_cast<int>(r) + 1, static_cast<int>(c), new QTableWidgetItem(q(page.preview.rows[r].cells[c])));
+      page.table->setItem(static_cast<int>(r) + 1, static_cast<int>(c),
+                          new QTableWidgetItem(q(page.preview.rows[r].cells[c])));
   page.table->resizeColumnsToContents();
-  for (int c = 0; c < cols; ++c) page.table->setColumnWidth(c, std::clamp(page.table->columnWidth(c), 150, 260));
+  for (int c = 0; c < cols; ++c) page.table->setColumnWidth(c, std::clamp(page.table->columnWidth(c), 120, 210));
   l->addWidget(page.table, 1);
   return w;
 }
@@ -139,7 +145,8 @@ QWidget* CsvImportDialog::make_page(Page& page, const QString& what) {
 CsvOptions CsvImportDialog::options_of(const Page& page) const {
   CsvOptions o;
   o.units = model_.units();
-  for (std::size_t c = 0; c < page.boxes.size(); ++c) o.column_names[c] = page.boxes[c]->currentData().toString().toStdString();
+  for (std::size_t c = 0; c < page.boxes.size(); ++c)
+    o.column_names[c] = page.boxes[c]->currentData().toString().toStdString();
   return o;
 }
 
@@ -156,7 +163,8 @@ void CsvImportDialog::mark_cells(Page& page, const std::vector<Problem>& problem
     const QRegularExpressionMatch m = cell.match(q(p.path));
     if (!m.hasMatch()) continue;
     const std::size_t line = m.captured(1).toULongLong();
-    const int column = m.captured(2).isEmpty() ? -1 : m.captured(2).toInt() - 1;
+    int column = m.captured(2).isEmpty() ? -1 : m.captured(2).toInt() - 1;
+    if (column >= page.table->columnCount()) column = -1;  // a row with too many cells: the whole row
     for (std::size_t r = 0; r < page.preview.rows.size(); ++r) {
       if (page.preview.rows[r].line != line) continue;
       for (int c = 0; c < page.table->columnCount(); ++c)
@@ -186,13 +194,15 @@ void CsvImportDialog::recheck() {
     Project candidate = model_.project();
     candidate.store.parts = result_.parts;
     candidate.store.slots = result_.slots;
-    for (const Problem& p : model_.check_as_file(candidate)) lines << tr("the project after the import: %1").arg(q(format_problem("project", p)));
+    for (const Problem& p : model_.check_as_file(candidate))
+      lines << tr("the project after the import: %1").arg(q(format_problem("project", p)));
   }
   problem_list_->clear();
   problem_list_->addItems(lines);
   for (Page* p : {&pp, &sp}) mark_cells(*p, result_.problems);
   const bool ok = lines.isEmpty();
-  if (!ok) result_.problems.emplace_back("invalid_value", "", "", "the project after the import would not load", "", "");
+  if (!ok)
+    result_.problems.emplace_back("invalid_value", "", "", "the project after the import would not load", "", "");
   import_->setEnabled(ok);
   verdict_->setText(ok ? tr("Ready: %1 parts and %2 slots replace the project's %3 parts and %4 slots (undo takes "
                             "them back).")
@@ -201,7 +211,8 @@ void CsvImportDialog::recheck() {
                              .arg(model_.project().store.parts.size())
                              .arg(model_.project().store.slots.size())
                        : tr("%1 problems: nothing can be imported until they are put right (choose another field "
-                            "for a column, or correct the file).").arg(lines.size()));
+                            "for a column, or correct the file).")
+                             .arg(lines.size()));
 }
 
 QComboBox* CsvImportDialog::mapping_box(Table t, int column) const {
@@ -209,7 +220,9 @@ QComboBox* CsvImportDialog::mapping_box(Table t, int column) const {
   return column >= 0 && static_cast<std::size_t>(column) < b.size() ? b[static_cast<std::size_t>(column)] : nullptr;
 }
 
-QTableWidget* CsvImportDialog::preview(Table t) const { return pages_[t].table; }
+QTableWidget* CsvImportDialog::preview(Table t) const {
+  return pages_[t].table;
+}
 
 QStringList CsvImportDialog::problems() const {
   QStringList out;
@@ -217,6 +230,8 @@ QStringList CsvImportDialog::problems() const {
   return out;
 }
 
-bool CsvImportDialog::can_import() const { return import_->isEnabled(); }
+bool CsvImportDialog::can_import() const {
+  return import_->isEnabled();
+}
 
 }  // namespace rackreach::gui

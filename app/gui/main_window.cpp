@@ -110,10 +110,14 @@ MainWindow::MainWindow(bool remember, QWidget* parent) : QMainWindow(parent), re
   findings_view_->horizontalHeader()->setStretchLastSection(false);
   findings_view_->setTextElideMode(Qt::ElideRight);
   findings_view_->setWordWrap(false);
-  for (auto [column, width] : {std::pair{FindingsModel::rank, 44}, std::pair{FindingsModel::slot, 104},
-                               std::pair{FindingsModel::li, 52}, std::pair{FindingsModel::band, 92},
-                               std::pair{FindingsModel::remedies, 300}})
-    findings_view_->setColumnWidth(column, width);
+  const std::pair<FindingsModel::Column, int> widths[] = {
+                               {FindingsModel::rank, 56}, {FindingsModel::slot, 104}, {FindingsModel::li, 56},
+                               {FindingsModel::band, 112}, {FindingsModel::remedies, 330}, {FindingsModel::part, 84},
+                               {FindingsModel::family, 96}, {FindingsModel::rack, 56}, {FindingsModel::level, 48},
+                               {FindingsModel::bay, 40}, {FindingsModel::position, 52}, {FindingsModel::load, 72},
+                               {FindingsModel::frequency, 64}, {FindingsModel::li_origin, 70},
+                               {FindingsModel::li_destination, 64}, {FindingsModel::reach, 190}};
+  for (auto [column, width] : widths) findings_view_->setColumnWidth(column, width);
   auto* findings_page = new QWidget;
   auto* fl = new QVBoxLayout(findings_page);
   fl->setContentsMargins(4, 4, 4, 4);

@@ -30,8 +30,8 @@ QString recovery_file_for(const QString& dir, const QString& project_path) {
   return dir + '/' + QFileInfo(project_path).completeBaseName() + '-' + QString::fromLatin1(hash) + suffix;
 }
 
-std::optional<std::string> write_recovery(const QString& dir, const QString& project_path, const std::string& project_text,
-                                          const QDateTime& when) {
+std::optional<std::string> write_recovery(const QString& dir, const QString& project_path,
+                                          const std::string& project_text, const QDateTime& when) {
   if (!QDir().mkpath(dir)) return "cannot make the folder " + dir.toStdString();
   QJsonObject o;
   o[format_key] = 1;

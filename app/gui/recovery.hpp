@@ -29,8 +29,8 @@ QString default_recovery_dir();
 /// The recovery file of a project path (empty: untitled) in `dir`.
 QString recovery_file_for(const QString& dir, const QString& project_path);
 /// Writes the recovery of `project_text` atomically; returns the reason on failure.
-std::optional<std::string> write_recovery(const QString& dir, const QString& project_path, const std::string& project_text,
-                                          const QDateTime& when);
+std::optional<std::string> write_recovery(const QString& dir, const QString& project_path,
+                                          const std::string& project_text, const QDateTime& when);
 /// Reads one recovery file; nothing if it is not one.
 std::optional<RecoveryFile> read_recovery(const QString& file);
 /// Every readable recovery file in `dir`, newest first.

@@ -59,7 +59,8 @@ RackDialog::RackDialog(const ProjectModel& model, std::optional<std::size_t> ind
   const Store& store = model.project().store;
   const bool editing = index && *index < store.racks.size();
   Rack rack;
-  if (editing) rack = store.racks[*index];
+  if (editing)
+    rack = store.racks[*index];
   else {
     rack.id = "R" + std::to_string(store.racks.size() + 1);
     rack.zone = store.zones.empty() ? "" : store.zones.front().id;
@@ -89,9 +90,10 @@ RackDialog::RackDialog(const ProjectModel& model, std::optional<std::size_t> ind
   shelf_depth_ = new QLineEdit(q(number_text(rack.shelf_depth)));
 
   levels_ = new QTableWidget(0, 4);
-  levels_->setHorizontalHeaderLabels({tr("Level"), tr("Surface height (%1)").arg(lu), tr("Clear height (%1)").arg(lu),
-                                      tr("Access")});
+  levels_->setHorizontalHeaderLabels(
+      {tr("Level"), tr("Surface height (%1)").arg(lu), tr("Clear height (%1)").arg(lu), tr("Access")});
   levels_->horizontalHeader()->setStretchLastSection(true);
+  for (int c = 0; c < 3; ++c) levels_->horizontalHeader()->setSectionResizeMode(c, QHeaderView::ResizeToContents);
   levels_->setAccessibleName(tr("Levels, from the floor up"));
   for (const Level& l : rack.levels) {
     const int r = levels_->rowCount();
@@ -105,7 +107,7 @@ RackDialog::RackDialog(const ProjectModel& model, std::optional<std::size_t> ind
     levels_->setCellWidget(r, 3, access);
   }
   auto* add = new QPushButton(tr("Add &level"));
-  auto* remove = new QPushButton(tr("Remove le&vel"));
+  auto* remove = new QPushButton(tr("Re&move level"));
   connect(add, &QPushButton::clicked, this, &RackDialog::add_level);
   connect(remove, &QPushButton::clicked, this, [this] { remove_level(levels_->currentRow()); });
 
@@ -199,7 +201,9 @@ bool RackDialog::try_accept() {
   return false;
 }
 
-QString RackDialog::message() const { return message_->text(); }
+QString RackDialog::message() const {
+  return message_->text();
+}
 
 ZoneDialog::ZoneDialog(const ProjectModel& model, std::optional<std::size_t> index, QWidget* parent)
     : QDialog(parent), model_(model), index_(index) {
@@ -208,7 +212,8 @@ ZoneDialog::ZoneDialog(const ProjectModel& model, std::optional<std::size_t> ind
   const bool editing = index && *index < store.zones.size();
   const UnitSystem u = model.units();
   auto in_units = [u](double cm) { return Length{cm, UnitSystem::metric}.in_units(u); };
-  if (editing) original_ = store.zones[*index];
+  if (editing)
+    original_ = store.zones[*index];
   else {
     original_.id = "Z" + std::to_string(store.zones.size() + 1);
     original_.standing_distance = {in_units(ZoneDefaults::standing_distance_cm), ValueSource::built_in_default};
@@ -276,8 +281,10 @@ bool ZoneDialog::try_accept() {
   };
   for (const auto& [key, spec] : rows) {
     const QString text = fields_.at(QString::fromLatin1(key))->text().trimmed();
-    if (text.isEmpty()) z.*(spec.first) = {spec.second, ValueSource::built_in_default};
-    else if (const auto v = read_number(text, QString::fromLatin1(key), why)) z.*(spec.first) = {*v, ValueSource::file};
+    if (text.isEmpty())
+      z.*(spec.first) = {spec.second, ValueSource::built_in_default};
+    else if (const auto v = read_number(text, QString::fromLatin1(key), why))
+      z.*(spec.first) = {*v, ValueSource::file};
   }
   if (why.isEmpty()) {
     Store s = model_.store_with_zone(index_, z);
@@ -294,6 +301,8 @@ bool ZoneDialog::try_accept() {
   return false;
 }
 
-QString ZoneDialog::message() const { return message_->text(); }
+QString ZoneDialog::message() const {
+  return message_->text();
+}
 
 }  // namespace rackreach::gui

@@ -245,6 +245,13 @@ void TaskForm::recheck() {
     label->setStyleSheet(bad ? "color: #8B0000" : "");
     if (auto e = edits_.find(key); e != edits_.end()) e->second->setStyleSheet(bad ? "border: 2px solid #8B0000" : "");
   }
+  if (QLabel* f = messages_.count("frequency") ? messages_["frequency"] : nullptr;
+      f && f->text().isEmpty() && editing_ && loaded_sample_ &&
+      edits_.at("frequency")->text().trimmed() == loaded_frequency_.trimmed())
+    f->setText(tr("from a sample: %1 lifts/min for %2 of %3 min (kept; typing another F replaces it)")
+                   .arg(loaded_sample_->lifts_per_min)
+                   .arg(loaded_sample_->lifting_min)
+                   .arg(loaded_sample_->sample_min));
   QStringList other;
   for (const std::string& s : check_.other_problems) other << q(s);
   other_problems_->setText(other.join('\n'));
@@ -322,6 +329,7 @@ void TaskForm::load_task(std::size_t job, std::size_t task) {
   edits_["max_load"]->setText(q(f.max_load));
   edits_["frequency"]->setText(q(f.frequency));
   loaded_frequency_ = q(f.frequency);
+  loaded_sample_ = task < jobs[job].details.size() ? jobs[job].details[task].frequency_sample : std::nullopt;
   if (duration_->findData("pattern") < 0 && f.duration == "pattern") duration_->addItem(tr("from the job's work pattern"), "pattern");
   duration_->setCurrentIndex(duration_->findData(q(f.duration)));
   coupling_->setCurrentIndex(coupling_->findData(q(f.coupling)));

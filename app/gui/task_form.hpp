@@ -73,6 +73,7 @@ class TaskForm : public QWidget {
   std::vector<WorkPeriod> pattern_;  ///< the work pattern of the job being edited, kept as it is
   std::optional<std::pair<std::size_t, std::size_t>> editing_;  ///< job and task being edited
   QString loaded_frequency_;  ///< F as loaded: while it is not retyped, the task's frequency sample stays
+  std::optional<FrequencySample> loaded_sample_;  ///< the sample F came from, shown beside F
 };
 
 }  // namespace rackreach::gui

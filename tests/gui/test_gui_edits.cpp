@@ -11,6 +11,7 @@
 #include <QComboBox>
 #include <QFile>
 #include <QHeaderView>
+#include <QImage>
 #include <QLineEdit>
 #include <QPushButton>
 #include <QScrollBar>
@@ -23,14 +24,17 @@
 #include <QThread>
 #include <QTimer>
 
+#include <algorithm>
 #include <cmath>
 #include <set>
 
 #include "app/gui/csv_import_dialog.hpp"
 #include "app/gui/edit_commands.hpp"
 #include "app/gui/findings_model.hpp"
+#include "app/gui/inspector_view.hpp"
 #include "app/gui/main_window.hpp"
 #include "app/gui/rack_view.hpp"
+#include "app/gui/screenshot.hpp"
 #include "app/gui/store_dialogs.hpp"
 #include "app/gui/store_tables.hpp"
 #include "app/gui/task_form.hpp"
@@ -44,7 +48,8 @@ using namespace rackreach::gui;
 namespace {
 
 const QString demo = QString::fromStdString(shared_reference::repo_path("sample_tasks/kitting-store.rackreach.json"));
-const QString dock = QString::fromStdString(shared_reference::repo_path("sample_tasks/receiving-dock-us.rackreach.json"));
+const QString dock =
+    QString::fromStdString(shared_reference::repo_path("sample_tasks/receiving-dock-us.rackreach.json"));
 
 /// The assessment the CLI would make of the model's project now, from nothing.
 ProjectAssessment full_assessment(const ProjectModel& m) {
@@ -413,4 +418,126 @@ TEST_CASE("the window remembers its size and the split between drawing and lists
   }
   MainWindow again(true);
   CHECK(again.size() == QSize(1100, 700));
+}
+
+TEST_CASE("pictures of the CSV preview and the rack dialog") {
+  const QString out = QStringLiteral(RACKREACH_GUI_TEST_OUT);
+  QTemporaryDir dir;
+  REQUIRE(dir.isValid());
+  ProjectModel m;
+  REQUIRE(m.open(demo).empty());
+  // The demo store's files with a part column the importer does not know and one bad weight.
+  std::vector<Part> plain = m.project().store.parts;
+  for (Part& p : plain) p.description.clear();
+  std::string parts = write_parts_csv(plain, m.units());
+  parts = "Item Code" + parts.substr(2);
+  std::size_t cell = parts.find('\n') + 1;
+  for (int line = 0; line < 2; ++line) cell = parts.find('\n', cell) + 1;  // the fourth line
+  for (int k = 0; k < 3; ++k) cell = parts.find(',', cell) + 1;
+  parts.replace(cell, parts.find(',', cell) - cell, "12,5");  // a decimal comma: one cell too many
+  write_text(dir.filePath("parts.csv"), parts);
+  write_text(dir.filePath("slots.csv"), write_slots_csv(m.project().store.slots, m.units()));
+  CsvImportDialog d(m, dir.filePath("parts.csv"), dir.filePath("slots.csv"));
+  QComboBox* id_box = d.mapping_box(CsvImportDialog::parts_table, 0);
+  id_box->setCurrentIndex(id_box->findData("id"));
+  CHECK_FALSE(d.can_import());
+  const QString csv_png = out + "/csv-preview.png";
+  REQUIRE(save_widget_png(d, csv_png, QSize(1100, 640)).isEmpty());
+  CHECK(QImage(csv_png).width() == 1100);
+
+  // The task form on a task whose F comes from a sample (the note beside F).
+  ProjectModel dock_model;
+  REQUIRE(dock_model.open(dock).empty());
+  TaskForm form(dock_model);
+  const auto& jobs = dock_model.project().jobs;
+  for (std::size_t j = 0; j < jobs.size(); ++j)
+    for (std::size_t t = 0; t < jobs[j].details.size(); ++t)
+      if (jobs[j].details[t].frequency_sample) form.load_task(j, t);
+  CHECK(form.field_message("frequency").contains("from a sample"));
+  REQUIRE(save_widget_png(form, out + "/task-form-sample.png", QSize(1100, 720)).isEmpty());
+
+  RackDialog r(m, 3);
+  r.levels_table()->item(2, 1)->setText("20");
+  CHECK_FALSE(r.try_accept());
+  const QString rack_png = out + "/rack-dialog.png";
+  REQUIRE(save_widget_png(r, rack_png, QSize(640, 560)).isEmpty());
+  CHECK(QImage(rack_png).height() == 560);
+}
+
+TEST_CASE("the walk: the worst slot, why, its part moved to the place its remedy names, the result") {
+  MainWindow w(false);
+  REQUIRE(w.open_file(demo).isEmpty());
+  w.resize(1280, 800);
+  w.show();
+  QApplication::processEvents();
+  ProjectModel& m = w.model();
+  QAction* worst_action = find_action(w, QKeySequence(QStringLiteral("Ctrl+Shift+W")));
+  REQUIRE(worst_action);
+  worst_action->trigger();
+  REQUIRE(w.selected_slot());
+  const SlotFinding worst = *m.find_finding(*w.selected_slot());
+  const std::string part = worst.part_id;
+  CAPTURE(worst.slot_id, part);
+  // Why: the inspector shows its LI and remedies.
+  const QString why = w.inspector()->toPlainText();
+  CHECK(why.contains(QStringLiteral("LI %1").arg(w.inspector()->shown_li())));
+  const Remedy* waist = nullptr;
+  for (const Remedy& r : worst.remedies)
+    if (r.kind == RemedyKind::move_to_waist_zone) waist = &r;
+  REQUIRE(waist);
+  CHECK(why.contains(QString::fromStdString(waist->target)));
+  CAPTURE(waist->reason);
+  // The place the remedy names ("rack R level L front"), at a bay where it is free: the slot goes there by three
+  // edits of the Slots table (bay, position, level; each checked by the loader, none taking a held place).
+  const Store& store = m.project().store;
+  const std::size_t index = worst.slot_index;
+  const Slot before = store.slots[index];
+  REQUIRE(waist->target.rfind("rack " + before.rack + " level ", 0) == 0);
+  const std::string level = waist->target.substr(("rack " + before.rack + " level ").size(),
+                                                 waist->target.rfind(' ') - ("rack " + before.rack + " level ").size());
+  const bool front = waist->target.substr(waist->target.rfind(' ') + 1) == "front";
+  auto held = [&](const std::string& l, int bay, bool f) {
+    for (const Slot& s : store.slots)
+      if (s.rack == before.rack && s.level == l && s.bay == bay && (s.position == SlotPosition::front) == f)
+        return true;
+    return false;
+  };
+  int bay = 0;
+  for (int b = 1; b <= store.find_rack(before.rack)->bays && !bay; ++b)
+    if (!held(level, b, front) && !held(before.level, b, front) &&
+        !held(before.level, b, before.position == SlotPosition::front))
+      bay = b;
+  REQUIRE(bay > 0);
+  SlotsTableModel slots(m);
+  REQUIRE(
+      slots.setData(slots.index(static_cast<int>(index), SlotsTableModel::bay), QString::number(bay), Qt::EditRole));
+  REQUIRE(slots.setData(slots.index(static_cast<int>(index), SlotsTableModel::position), front ? "front" : "back",
+                        Qt::EditRole));
+  REQUIRE(slots.setData(slots.index(static_cast<int>(index), SlotsTableModel::level), QString::fromStdString(level),
+                        Qt::EditRole));
+  CHECK(m.last_slots_evaluated() == 1);
+  const SlotFinding* moved = m.find_finding(index);
+  REQUIRE(moved->part_id == part);
+  REQUIRE(moved->result.li);
+  // At the remedy's place the part's LI is the one the remedy promised, and the slot is within the limit.
+  CHECK(*moved->result.li == Approx(*waist->number).epsilon(1e-12));
+  CHECK((!worst.result.li || *moved->result.li < *worst.result.li));  // outside the equation before, or higher
+  CHECK(moved->band == RiskBand::within_limit);
+  CHECK(m.review()->findings.front().slot_id != worst.slot_id);
+  CHECK(*m.review() == *full_assessment(m).store);
+  const std::size_t rank =
+      static_cast<std::size_t>(std::find_if(m.review()->findings.begin(), m.review()->findings.end(),
+                                            [&](const SlotFinding& f) { return f.slot_index == index; }) -
+                               m.review()->findings.begin());
+  w.select_slot(index);
+  const QString out = QStringLiteral(RACKREACH_GUI_TEST_OUT);
+  REQUIRE(save_widget_png(w, out + "/walk-after-move.png", QSize(1280, 800)).isEmpty());
+  // The walk's numbers, shown if a check above fails.
+  INFO("worst " << worst.slot_id << " (" << part << ", " << band_name(worst.band) << ", V " << worst.lift.task.origin.v
+                << " H " << worst.lift.task.origin.h << ") moved to rack " << before.rack << " level " << level
+                << " bay " << bay << (front ? " front" : " back") << ": V " << moved->lift.task.origin.v << " H "
+                << moved->lift.task.origin.h << " LI " << *moved->result.li << " (" << band_name(moved->band)
+                << "), now rank " << rank + 1 << " of " << m.review()->findings.size() << "; new worst "
+                << m.review()->findings.front().slot_id);
+  CHECK(rank + 1 > 10);  // out of the top ten
 }

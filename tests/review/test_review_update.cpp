@@ -23,7 +23,8 @@ namespace {
 /// Where the two reviews first differ, for the failure message.
 std::string first_difference(const StoreReview& a, const StoreReview& b) {
   std::ostringstream out;
-  if (a.findings.size() != b.findings.size()) out << "findings: " << a.findings.size() << " vs " << b.findings.size();
+  if (a.findings.size() != b.findings.size())
+    out << "findings: " << a.findings.size() << " vs " << b.findings.size();
   else
     for (std::size_t i = 0; i < a.findings.size(); ++i)
       if (!(a.findings[i] == b.findings[i])) {
@@ -63,13 +64,19 @@ std::vector<StoreEdit> random_edit(Store& store, UnitSystem units, std::mt19937_
     const std::size_t p = pick(store.parts.size());
     Part& part = store.parts[p];
     switch (kind) {
-      case 0: part.unit_weight = real(0.2, 30.0) * mass; break;
-      case 1: part.pieces_per_kit = static_cast<double>(1 + pick(6)); break;
+      case 0:
+        part.unit_weight = real(0.2, 30.0) * mass;
+        break;
+      case 1:
+        part.pieces_per_kit = static_cast<double>(1 + pick(6));
+        break;
       case 2:
         part.box.height = real(5.0, 40.0) * len;
         part.box.depth = real(10.0, 60.0) * len;
         break;
-      case 3: part.family = store.parts[pick(store.parts.size())].family; break;
+      case 3:
+        part.family = store.parts[pick(store.parts.size())].family;
+        break;
       case 4:
         part.truck_only = pick(5) == 0;
         part.pack_pieces = static_cast<int>(1 + pick(3));
@@ -154,9 +161,9 @@ Project make_store(int racks, std::uint64_t seed) {
     z.cart_h = {40.0, ValueSource::file};
     z.turn_angle_deg = {id[1] == '1' ? 45.0 : 90.0, ValueSource::file};
     z.origin_angle_deg = {0.0, ValueSource::built_in_default};
-    if (id[1] == '2') z.lifting_pattern = std::vector<WorkPeriod>{{WorkPeriod::Kind::lifting, 50.0},
-                                                                  {WorkPeriod::Kind::recovery, 60.0},
-                                                                  {WorkPeriod::Kind::lifting, 50.0}};
+    if (id[1] == '2')
+      z.lifting_pattern = std::vector<WorkPeriod>{
+          {WorkPeriod::Kind::lifting, 50.0}, {WorkPeriod::Kind::recovery, 60.0}, {WorkPeriod::Kind::lifting, 50.0}};
     s.zones.push_back(z);
   }
   for (int r = 0; r < 2 * racks; ++r) {
@@ -182,7 +189,9 @@ Project make_store(int racks, std::uint64_t seed) {
           part.family = "F" + std::to_string(n / 5);
           part.unit_weight = real(0.3, 25.0);
           part.box = {real(10.0, 45.0), real(10.0, 45.0), real(8.0, 40.0)};
-          part.handhold = Handhold{n % 3 == 0 ? HandholdKind::handles : n % 3 == 1 ? HandholdKind::cutouts : HandholdKind::none,
+          part.handhold = Handhold{n % 3 == 0   ? HandholdKind::handles
+                                   : n % 3 == 1 ? HandholdKind::cutouts
+                                                : HandholdKind::none,
                                    n % 2 == 0, n % 4 == 0};
           part.pieces_per_kit = 1.0 + n % 3;
           part.pack_pieces = n % 7 == 0 ? 10 : 1;
