@@ -27,6 +27,7 @@
 
 #include <algorithm>
 #include <set>
+#include <tuple>
 
 #include "app/gui/csv_import_dialog.hpp"
 #include "app/gui/edit_commands.hpp"
@@ -814,21 +815,26 @@ void MainWindow::on_add_slot() {
   s.part = store.parts.front().id;
   s.rack = store.racks.front().id;
   s.level = store.racks.front().levels.empty() ? "" : store.racks.front().levels.front().id;
-  // The first free place of the first rack.
+  // The first free place of the store (a quick look at which places are held), then the loader's check.
+  std::set<std::tuple<std::string, std::string, int, int>> held;
+  for (const Slot& o : store.slots) held.emplace(o.rack, o.level, o.bay, static_cast<int>(o.position));
   for (const Rack& r : store.racks)
     for (const Level& l : r.levels)
       for (int b = 1; b <= r.bays; ++b)
         for (SlotPosition p : {SlotPosition::front, SlotPosition::back}) {
+          if (held.count({r.id, l.id, b, static_cast<int>(p)})) continue;
           Slot t = s;
           t.rack = r.id, t.level = l.id, t.bay = b, t.position = p;
-          if (model_.validate_slot(t, std::nullopt).empty()) {
-            model_.undo_stack()->push(new InsertSlotCommand(model_, store.slots.size(), t, false,
-                                                            tr("Add slot %1").arg(q(t.id))));
-            select_slot(store.slots.size() - 1);
+          if (const std::string why = model_.validate_slot(t, std::nullopt); !why.empty()) {
+            statusBar()->showMessage(tr("Not added: %1").arg(q(why)), 8000);
             return;
           }
+          model_.undo_stack()->push(new InsertSlotCommand(model_, store.slots.size(), t, false,
+                                                          tr("Add slot %1").arg(q(t.id))));
+          select_slot(store.slots.size() - 1);
+          return;
         }
-  statusBar()->showMessage(tr("Not added: %1").arg(q(model_.validate_slot(s, std::nullopt))), 8000);
+  statusBar()->showMessage(tr("Not added: every place of the store's racks holds a slot."), 8000);
 }
 
 void MainWindow::on_remove_slot() {
