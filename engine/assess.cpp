@@ -98,7 +98,9 @@ ReviewOptions make_review_options(const AssessOptions& options, DurationRule rul
   return ro;
 }
 
-ProjectAssessment assess_project(const Project& project, const AssessOptions& options) {
+namespace {
+
+ProjectAssessment assess(const Project& project, const AssessOptions& options, StoreReviewer* reviewer) {
   ProjectAssessment out;
   out.units = project.units;
   out.rounding = options.rounding;
@@ -110,9 +112,20 @@ ProjectAssessment assess_project(const Project& project, const AssessOptions& op
     out.jobs.push_back(assess_job(job, project.units, out.duration_rule, options.rounding,
                                   options.reach ? &*options.reach : nullptr));
   if (!project.store.slots.empty()) {
-    out.store = review_store(project.store, project.units, make_review_options(options, out.duration_rule));
+    out.store = reviewer ? reviewer->review(project.store)
+                         : review_store(project.store, project.units, make_review_options(options, out.duration_rule));
   }
   return out;
+}
+
+}  // namespace
+
+ProjectAssessment assess_project(const Project& project, const AssessOptions& options) {
+  return assess(project, options, nullptr);
+}
+
+ProjectAssessment assess_project(const Project& project, const AssessOptions& options, StoreReviewer& reviewer) {
+  return assess(project, options, &reviewer);
 }
 
 }  // namespace rackreach

@@ -60,5 +60,8 @@ ReviewOptions make_review_options(const AssessOptions& options, DurationRule rul
 JobAssessment assess_job(const LiftJob& job, UnitSystem units, DurationRule rule, RoundingMode mode,
                          const ReachSetup* reach = nullptr);
 ProjectAssessment assess_project(const Project& project, const AssessOptions& options);
+/// The same, the store reviewed by `reviewer` (made with make_review_options(options, the rule used)), which then
+/// keeps its caches for StoreReviewer::update() after later edits of the store.
+ProjectAssessment assess_project(const Project& project, const AssessOptions& options, StoreReviewer& reviewer);
 
 }  // namespace rackreach

@@ -12,6 +12,12 @@ ReplaceSlotCommand::ReplaceSlotCommand(ProjectModel& model, std::size_t index, S
     : QUndoCommand(text, parent), model_(model), index_(index), before_(model.project().store.slots.at(index)),
       after_(std::move(after)) {}
 
+ReplaceSlotsCommand::ReplaceSlotsCommand(ProjectModel& model, std::vector<std::pair<std::size_t, Slot>> after,
+                                         const QString& text)
+    : QUndoCommand(text), model_(model), after_(std::move(after)) {
+  for (const auto& [index, slot] : after_) before_.emplace_back(index, model.project().store.slots.at(index));
+}
+
 InsertSlotCommand::InsertSlotCommand(ProjectModel& model, std::size_t index, Slot slot, bool remove,
                                      const QString& text)
     : QUndoCommand(text), model_(model), index_(index), slot_(std::move(slot)),
@@ -43,6 +49,9 @@ void ReplaceJobCommand::apply(const std::optional<LiftJob>& from, const std::opt
   else if (to) model_.insert_job(index_, *to);
   else if (from) model_.remove_job(index_);
 }
+
+SetStoreCommand::SetStoreCommand(ProjectModel& model, Store after, const QString& text)
+    : QUndoCommand(text), model_(model), before_(model.project().store), after_(std::move(after)) {}
 
 ReplaceStoreItemsCommand::ReplaceStoreItemsCommand(ProjectModel& model, std::vector<Part> parts,
                                                    std::vector<Slot> slots, const QString& text)

@@ -34,6 +34,18 @@ class ReplaceSlotCommand : public QUndoCommand {
   Slot before_, after_;
 };
 
+/// Replaces several slots at once (parts swapped between slots): one step of the history, one reassessment.
+class ReplaceSlotsCommand : public QUndoCommand {
+ public:
+  ReplaceSlotsCommand(ProjectModel& model, std::vector<std::pair<std::size_t, Slot>> after, const QString& text);
+  void redo() override { model_.replace_slots(after_); }
+  void undo() override { model_.replace_slots(before_); }
+
+ private:
+  ProjectModel& model_;
+  std::vector<std::pair<std::size_t, Slot>> before_, after_;
+};
+
 /// Adds a slot (or, with `remove`, takes one away: the same pair of steps the other way round).
 class InsertSlotCommand : public QUndoCommand {
  public:
@@ -76,6 +88,19 @@ class ReplaceJobCommand : public QUndoCommand {
   ProjectModel& model_;
   std::size_t index_;
   std::optional<LiftJob> before_, after_;
+};
+
+/// Replaces the whole store (a rack, level or zone added, edited or removed; the slots and racks that name it by
+/// id follow it). The new store was checked by the loader's rules (ProjectModel::check_store) before.
+class SetStoreCommand : public QUndoCommand {
+ public:
+  SetStoreCommand(ProjectModel& model, Store after, const QString& text);
+  void redo() override { model_.set_store(after_); }
+  void undo() override { model_.set_store(before_); }
+
+ private:
+  ProjectModel& model_;
+  Store before_, after_;
 };
 
 /// Replaces the store's parts and slots at once (a CSV import).

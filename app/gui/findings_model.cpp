@@ -88,7 +88,7 @@ QVariant FindingsModel::data(const QModelIndex& index, int role) const {
   if (role == Qt::ForegroundRole && index.column() == band && !f.truck_access &&
       f.band != RiskBand::outside_equation)
     return QBrush(band_text_colour(f.band));
-  if (role == Qt::TextAlignmentRole && (index.column() >= load && index.column() <= li))
+  if (role == Qt::TextAlignmentRole && (index.column() == li || (index.column() >= load && index.column() <= li_destination)))
     return int(Qt::AlignRight | Qt::AlignVCenter);
   if (role == Qt::ToolTipRole && index.column() == remedies) {
     QStringList lines;
@@ -137,6 +137,11 @@ void FindingsFilter::set_filter(const QString& band, const QString& family, cons
   rack_ = rack;
   remedy_ = remedy;
   invalidateFilter();
+}
+
+bool FindingsFilter::lessThan(const QModelIndex& left, const QModelIndex& right) const {
+  if (left.column() == FindingsModel::rank && right.column() == FindingsModel::rank) return left.row() < right.row();
+  return QSortFilterProxyModel::lessThan(left, right);
 }
 
 bool FindingsFilter::filterAcceptsRow(int row, const QModelIndex& parent) const {

@@ -13,8 +13,9 @@ class FindingsModel : public QAbstractTableModel {
   Q_OBJECT
 
  public:
-  enum Column { rank, slot, part, family, rack, level, bay, position, load, frequency, li_origin, li_destination,
-                li, band, reach, remedies, column_count };
+  /// The slot, its LI, band and remedies first, so that they show without scrolling at 1280x800.
+  enum Column { rank, slot, li, band, remedies, part, family, rack, level, bay, position, load, frequency, li_origin,
+                li_destination, reach, column_count };
   /// Roles beside the display: the slot index, and the words the filters compare.
   static constexpr int slot_index_role = Qt::UserRole + 1;
   static constexpr int sort_role = Qt::UserRole + 2;
@@ -42,6 +43,8 @@ class FindingsFilter : public QSortFilterProxyModel {
 
  protected:
   bool filterAcceptsRow(int row, const QModelIndex& parent) const override;
+  /// The rank column compares the source rows themselves (they are in rank order): no text per comparison.
+  bool lessThan(const QModelIndex& left, const QModelIndex& right) const override;
 
  private:
   QString band_, family_, rack_, remedy_;

@@ -240,9 +240,9 @@ void InspectorView::refresh() {
     shown_load_.clear();
     shown_rwl_origin_.clear();
     shown_rwl_destination_.clear();
-    setHtml(QStringLiteral("<h2>Inspector</h2><p>Select a slot in the rack drawing or in the findings list to see "
-                           "every input, multiplier and result of its pick.</p>") +
-            make_caution_html());
+    show_html(QStringLiteral("<h2>Inspector</h2><p>Select a slot in the rack drawing or in the findings list to see "
+                             "every input, multiplier and result of its pick.</p>") +
+              make_caution_html());
     return;
   }
   shown_li_ = f->result.li ? fmt(*f->result.li, 3) : QStringLiteral("outside");
@@ -250,8 +250,14 @@ void InspectorView::refresh() {
   shown_load_ = d.mass_with_unit(f->lift.task.load, 2);
   shown_rwl_origin_ = d.mass_with_unit(f->result.origin.rwl, 3);
   shown_rwl_destination_ = d.mass_with_unit(f->result.destination.rwl, 3);
+  show_html(make_finding_html(model_, *f));
+}
+
+void InspectorView::show_html(const QString& html) {
+  if (html == html_) return;
+  html_ = html;
   const int scroll = verticalScrollBar() ? verticalScrollBar()->value() : 0;
-  setHtml(make_finding_html(model_, *f));
+  setHtml(html);
   if (verticalScrollBar()) verticalScrollBar()->setValue(scroll);
 }
 

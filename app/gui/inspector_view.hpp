@@ -37,6 +37,8 @@ class InspectorView : public QTextBrowser {
   ProjectModel& model_;
   std::optional<std::size_t> selected_;
   QString shown_li_, shown_load_, shown_rwl_origin_, shown_rwl_destination_;
+  QString html_;  ///< what is shown: laid out again only when it changes (an edit elsewhere in the store)
+  void show_html(const QString& html);
 };
 
 }  // namespace rackreach::gui

@@ -59,8 +59,11 @@ int main(int argc, char** argv) {
   }
   rackreach::gui::MainWindow w;
   w.show();
-  if (!project.isEmpty())
+  if (!project.isEmpty()) {  // opening it offers its recovery, if a session before did not end cleanly
     if (const QStringList p = w.open_file(project); !p.isEmpty())
       QMessageBox::warning(&w, QObject::tr("The file was not opened"), p.join('\n'));
+  } else {
+    w.offer_recovery();  // unsaved edits of the last session that did not end cleanly, if any
+  }
   return app.exec();
 }

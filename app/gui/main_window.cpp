@@ -15,27 +15,34 @@
 #include <QListWidget>
 #include <QMenuBar>
 #include <QMessageBox>
+#include <QPushButton>
 #include <QScrollArea>
 #include <QSettings>
 #include <QSplitter>
 #include <QStatusBar>
 #include <QTabWidget>
 #include <QTableView>
+#include <QTimer>
 #include <QVBoxLayout>
 
+#include <algorithm>
 #include <set>
+#include <tuple>
 
+#include "app/gui/csv_import_dialog.hpp"
 #include "app/gui/edit_commands.hpp"
 #include "app/gui/findings_model.hpp"
 #include "app/gui/format.hpp"
 #include "app/gui/inspector_view.hpp"
 #include "app/gui/rack_view.hpp"
 #include "app/gui/section_view.hpp"
+#include "app/gui/store_dialogs.hpp"
 #include "app/gui/store_tables.hpp"
 #include "app/gui/task_form.hpp"
 #include "engine/caution.hpp"
 #include "engine/io/atomic_file.hpp"
 #include "engine/io/csv_import.hpp"
+#include "engine/io/project_file.hpp"
 #include "engine/io/review_output.hpp"
 
 namespace rackreach::gui {
@@ -100,6 +107,18 @@ MainWindow::MainWindow(bool remember, QWidget* parent) : QMainWindow(parent), re
   findings_view_->setSortingEnabled(true);
   findings_view_->sortByColumn(FindingsModel::rank, Qt::AscendingOrder);
   findings_view_->setAccessibleName(tr("Ranked findings"));
+  // Slot, LI, band and remedies in view at 1280x800; long remedy lists are elided (the tooltip has them all).
+  findings_view_->horizontalHeader()->setStretchLastSection(false);
+  findings_view_->setTextElideMode(Qt::ElideRight);
+  findings_view_->setWordWrap(false);
+  const std::pair<FindingsModel::Column, int> widths[] = {
+                               {FindingsModel::rank, 56}, {FindingsModel::slot, 104}, {FindingsModel::li, 56},
+                               {FindingsModel::band, 112}, {FindingsModel::remedies, 330}, {FindingsModel::part, 84},
+                               {FindingsModel::family, 96}, {FindingsModel::rack, 56}, {FindingsModel::level, 48},
+                               {FindingsModel::bay, 40}, {FindingsModel::position, 52}, {FindingsModel::load, 72},
+                               {FindingsModel::frequency, 64}, {FindingsModel::li_origin, 70},
+                               {FindingsModel::li_destination, 64}, {FindingsModel::reach, 190}};
+  for (auto [column, width] : widths) findings_view_->setColumnWidth(column, width);
   auto* findings_page = new QWidget;
   auto* fl = new QVBoxLayout(findings_page);
   fl->setContentsMargins(4, 4, 4, 4);
@@ -165,6 +184,15 @@ MainWindow::MainWindow(bool remember, QWidget* parent) : QMainWindow(parent), re
   cl->addWidget(main_split, 1);
   cl->addWidget(caution_);
   setCentralWidget(central);
+  // Tab goes rack list, drawing, section, inspector, then the tabs below (the findings' filters, then the list).
+  setTabOrder(rack_list_, rack_view_);
+  setTabOrder(rack_view_, inspector_);
+  setTabOrder(inspector_, tabs_);
+  setTabOrder(tabs_, band_filter_);
+  setTabOrder(band_filter_, family_filter_);
+  setTabOrder(family_filter_, rack_filter_);
+  setTabOrder(rack_filter_, remedy_filter_);
+  setTabOrder(remedy_filter_, findings_view_);
 
   connect(rack_list_, &QListWidget::currentRowChanged, rack_view_, &RackView::set_rack);
   connect(rack_view_, &RackView::slot_selected, this, [this](std::size_t s) { select_slot(s); });
@@ -195,6 +223,15 @@ MainWindow::MainWindow(bool remember, QWidget* parent) : QMainWindow(parent), re
   units_label_->setAccessibleName(tr("Units shown"));
   statusBar()->addPermanentWidget(units_label_);
 
+  // Autosave: unsaved edits go to the recovery file after a pause in editing (and at each step of the history
+  // while the timer runs, it starts again).
+  if (remember_) recovery_dir_ = default_recovery_dir();
+  autosave_timer_ = new QTimer(this);
+  autosave_timer_->setSingleShot(true);
+  autosave_timer_->setInterval(5000);
+  connect(autosave_timer_, &QTimer::timeout, this, [this] { autosave_now(); });
+  connect(model_.undo_stack(), &QUndoStack::indexChanged, this, &MainWindow::on_history_changed);
+
   build_menus();
   if (remember_)
     if (const auto c = parse_display_choice(QSettings(settings_org, settings_app).value("view/units").toString()))
@@ -212,6 +249,14 @@ MainWindow::MainWindow(bool remember, QWidget* parent) : QMainWindow(parent), re
   }
 }
 
+MainWindow::~MainWindow() {
+  // The model is destroyed before the widgets (it is a member; they are children): its undo stack's last signals
+  // (it clears itself) must reach no one.
+  autosave_timer_->stop();
+  QObject::disconnect(model_.undo_stack(), nullptr, nullptr, nullptr);
+  QObject::disconnect(&model_, nullptr, nullptr, nullptr);
+}
+
 void MainWindow::build_menus() {
   QMenu* file = menuBar()->addMenu(tr("&File"));
   file->addAction(tr("&New metric project"), QKeySequence::New, this, [this] {
@@ -225,9 +270,10 @@ void MainWindow::build_menus() {
   file->addAction(tr("&Save"), QKeySequence::Save, this, &MainWindow::on_save);
   file->addAction(tr("Save &as..."), QKeySequence::SaveAs, this, &MainWindow::on_save_as);
   file->addSeparator();
-  file->addAction(tr("&Import parts and slots from CSV..."), this, &MainWindow::on_import_csv);
-  file->addAction(tr("Export findings as &CSV..."), this, [this] { on_export(false); });
-  file->addAction(tr("Export findings as &HTML..."), this, [this] { on_export(true); });
+  file->addAction(tr("&Import parts and slots from CSV..."), QKeySequence(tr("Ctrl+I")), this, &MainWindow::on_import_csv);
+  file->addAction(tr("Export findings as &CSV..."), QKeySequence(tr("Ctrl+E")), this, [this] { on_export(false); });
+  file->addAction(tr("Export findings as &HTML..."), QKeySequence(tr("Ctrl+Shift+E")), this, [this] { on_export(true); });
+  // ---- File > Export report: its action goes here, after the findings exports and before the separator. ----
   file->addSeparator();
   file->addAction(tr("&Quit"), QKeySequence::Quit, this, &QWidget::close);
 
@@ -241,10 +287,18 @@ void MainWindow::build_menus() {
   edit->addSeparator();
   edit->addAction(tr("&Move the selected slot's part to slot..."), QKeySequence(tr("Ctrl+M")), this,
                   &MainWindow::on_move_part);
-  edit->addAction(tr("Add a &slot..."), this, &MainWindow::on_add_slot);
-  edit->addAction(tr("Remove the selected slot"), this, &MainWindow::on_remove_slot);
-  edit->addAction(tr("Add a &part..."), this, &MainWindow::on_add_part);
+  edit->addAction(tr("Add a &slot..."), QKeySequence(tr("Ctrl+Shift+A")), this, &MainWindow::on_add_slot);
+  edit->addAction(tr("Remove the selected slot"), QKeySequence(tr("Ctrl+Shift+Del")), this, &MainWindow::on_remove_slot);
+  edit->addAction(tr("Add a &part..."), QKeySequence(tr("Ctrl+Shift+P")), this, &MainWindow::on_add_part);
   edit->addAction(tr("Remove the selected part"), this, &MainWindow::on_remove_part);
+  edit->addSeparator();
+  edit->addAction(tr("Add a ra&ck..."), QKeySequence(tr("Ctrl+Shift+K")), this, [this] { on_edit_rack(true); });
+  edit->addAction(tr("&Edit the shown rack and its levels..."), QKeySequence(tr("Ctrl+K")), this,
+                  [this] { on_edit_rack(false); });
+  edit->addAction(tr("Remove the shown rack"), this, &MainWindow::on_remove_rack);
+  edit->addAction(tr("Add a &zone..."), this, [this] { on_edit_zone(true); });
+  edit->addAction(tr("Edit a zo&ne..."), QKeySequence(tr("Ctrl+J")), this, [this] { on_edit_zone(false); });
+  edit->addAction(tr("Remove a zone..."), this, &MainWindow::on_remove_zone);
 
   QMenu* view = menuBar()->addMenu(tr("&View"));
   view->addAction(tr("Rack &drawing"), QKeySequence(tr("Ctrl+1")), this, [this] { rack_view_->setFocus(); });
@@ -253,6 +307,16 @@ void MainWindow::build_menus() {
     findings_view_->setFocus();
   });
   view->addAction(tr("&Inspector"), QKeySequence(tr("Ctrl+3")), this, [this] { inspector_->setFocus(); });
+  view->addAction(tr("&Rack list"), QKeySequence(tr("Ctrl+R")), this, [this] { rack_list_->setFocus(); });
+  view->addAction(tr("&Worst slot"), QKeySequence(tr("Ctrl+Shift+W")), this, [this] {
+    if (const StoreReview* r = model_.review(); r && !r->findings.empty()) {
+      select_slot(r->findings.front().slot_index);
+      tabs_->setCurrentIndex(0);
+      findings_view_->setFocus();
+    }
+  });
+  view->addAction(tr("&Next finding"), QKeySequence(Qt::Key_F8), this, [this] { step_finding(1); });
+  view->addAction(tr("&Previous finding"), QKeySequence(Qt::SHIFT | Qt::Key_F8), this, [this] { step_finding(-1); });
   view->addAction(tr("&Lift task form"), QKeySequence(tr("Ctrl+4")), this, [this] {
     tabs_->setCurrentIndex(tabs_->count() - 1);
     task_form_->setFocus();
@@ -279,6 +343,10 @@ QStringList MainWindow::open_file(const QString& path) {
   for (const Problem& p : problems) out << q(format_problem(path.toStdString(), p));
   if (!out.isEmpty()) return out;
   add_recent(path);
+  written_recovery_.clear();
+  // Unsaved edits of this project left by a session that did not end cleanly.
+  if (!offering_ && !recovery_dir_.isEmpty())
+    if (const auto r = read_recovery(recovery_file_for(recovery_dir_, path))) offer(*r);
   selected_.reset();
   select_slot(std::nullopt);
   if (rack_list_->count() > 0) rack_list_->setCurrentRow(0);
@@ -321,50 +389,67 @@ void MainWindow::select_slot(std::optional<std::size_t> slot_index) {
 void MainWindow::refresh_lists() {
   const Store& store = model_.project().store;
   {
+    // The rack list is made again only when the racks changed (not after every edit of a part or slot).
+    QStringList labels;
+    for (const Rack& r : store.racks) labels << tr("%1 (%2 levels)").arg(q(r.id)).arg(r.levels.size());
+    bool same = labels.size() == rack_list_->count();
+    for (int i = 0; same && i < labels.size(); ++i) same = rack_list_->item(i)->text() == labels[i];
     const QSignalBlocker b(rack_list_);
     const int cur = rack_list_->currentRow();
-    rack_list_->clear();
-    for (const Rack& r : store.racks)
-      rack_list_->addItem(tr("%1 (%2 levels)").arg(q(r.id)).arg(r.levels.size()));
+    if (!same) {
+      rack_list_->clear();
+      rack_list_->addItems(labels);
+    }
     rack_list_->setCurrentRow(cur >= 0 && cur < rack_list_->count() ? cur : (rack_list_->count() ? 0 : -1));
     rack_view_->set_rack(rack_list_->currentRow());
   }
-  auto refill = [](QComboBox* box, const std::set<QString>& items) {
+  // The filters' choices: filled again (and the filter applied again) only when they changed.
+  bool filters_changed = false;
+  auto refill = [&filters_changed](QComboBox* box, const std::set<std::string>& items) {
+    bool same = box->count() == static_cast<int>(items.size()) + 1;
+    int i = 1;
+    for (auto it = items.begin(); same && it != items.end(); ++it, ++i) same = box->itemData(i).toString() == q(*it);
+    if (same) return;
     const QSignalBlocker b(box);
     const QString cur = box->currentData().toString();
     box->clear();
     box->addItem(tr("any"), QString());
-    for (const QString& s : items) box->addItem(s, s);
-    const int i = box->findData(cur);
-    box->setCurrentIndex(i >= 0 ? i : 0);
+    for (const std::string& s : items) box->addItem(q(s), q(s));
+    const int k = box->findData(cur);
+    box->setCurrentIndex(k >= 0 ? k : 0);
+    filters_changed = filters_changed || box->currentData().toString() != cur;
   };
-  std::set<QString> families, racks, remedies;
-  const QStringList bands = {"within limit", "elevated", "high", "very high", "outside equation", "truck level"};
-  if (const StoreReview* r = model_.review())
-    for (const SlotFinding& f : r->findings) {
-      families.insert(q(f.family));
-      racks.insert(q(f.rack_id));
-      for (const Remedy& m : f.remedies) remedies.insert(QString::fromUtf8(remedy_name(m.kind)));
-    }
-  {
-    const QSignalBlocker b(band_filter_);
-    if (band_filter_->count() == 0) {
-      band_filter_->addItem(tr("any"), QString());
-      for (const QString& s : bands) band_filter_->addItem(s, s);
-    }
-  }
-  refill(family_filter_, families);
-  refill(rack_filter_, racks);
-  refill(remedy_filter_, remedies);
-  apply_filter();
-  // One line of figures under the rack list.
+  std::set<std::string> families, racks, remedies;
+  std::vector<bool> remedy_seen(static_cast<std::size_t>(RemedyKind::outside_scope) + 1, false);
+  int over = 0, outside = 0;
   if (const StoreReview* r = model_.review()) {
-    int over = 0, outside = 0;
+    // Families and racks from the store (small records; a family with no slot shows no rows), remedies from the
+    // findings.
+    const std::string* last = nullptr;
+    for (const Part& p : store.parts)
+      if (!last || *last != p.family) families.insert(*(last = &p.family));
+    for (const Rack& k : store.racks) racks.insert(k.id);
     for (const SlotFinding& f : r->findings) {
+      for (const Remedy& m : f.remedies) remedy_seen[static_cast<std::size_t>(m.kind)] = true;
       if (f.truck_access) continue;
       if (f.band == RiskBand::outside_equation) ++outside;
       else if (f.band != RiskBand::within_limit) ++over;
     }
+  }
+  for (std::size_t k = 0; k < remedy_seen.size(); ++k)
+    if (remedy_seen[k]) remedies.insert(remedy_name(static_cast<RemedyKind>(k)));
+  if (band_filter_->count() == 0) {
+    const QSignalBlocker b(band_filter_);
+    band_filter_->addItem(tr("any"), QString());
+    for (const char* s : {"within limit", "elevated", "high", "very high", "outside equation", "truck level"})
+      band_filter_->addItem(QString::fromLatin1(s), QString::fromLatin1(s));
+  }
+  refill(family_filter_, families);
+  refill(rack_filter_, racks);
+  refill(remedy_filter_, remedies);
+  if (filters_changed) apply_filter();
+  // One line of figures under the rack list.
+  if (const StoreReview* r = model_.review()) {
     summary_->setText(tr("%1 slots: %2 above LI 1, %3 outside the equation").arg(r->findings.size()).arg(over).arg(outside));
   } else {
     summary_->setText(model_.project().jobs.empty() ? tr("No store.") : tr("%1 lift jobs, no store.").arg(model_.project().jobs.size()));
@@ -375,6 +460,15 @@ void MainWindow::refresh_lists() {
 void MainWindow::apply_filter() {
   filter_->set_filter(band_filter_->currentData().toString(), family_filter_->currentData().toString(),
                       rack_filter_->currentData().toString(), remedy_filter_->currentData().toString());
+}
+
+void MainWindow::step_finding(int by) {
+  const int rows = filter_->rowCount();
+  if (rows == 0) return;
+  const int row = findings_view_->currentIndex().isValid() ? findings_view_->currentIndex().row() + by : 0;
+  const QModelIndex i = filter_->index(std::clamp(row, 0, rows - 1), 0);
+  findings_view_->selectionModel()->setCurrentIndex(i, QItemSelectionModel::ClearAndSelect | QItemSelectionModel::Rows);
+  findings_view_->scrollTo(i);
 }
 
 void MainWindow::on_display_changed() {
@@ -422,7 +516,91 @@ bool MainWindow::confirm_discard() {
                                             tr("The project has changes that are not saved. Save them first?"),
                                             QMessageBox::Save | QMessageBox::Discard | QMessageBox::Cancel);
   if (answer == QMessageBox::Save) return on_save();
+  if (answer == QMessageBox::Discard) remove_recovery();
   return answer == QMessageBox::Discard;
+}
+
+void MainWindow::set_autosave_delay_ms(int ms) { autosave_timer_->setInterval(ms); }
+
+QString MainWindow::recovery_file() const {
+  return recovery_dir_.isEmpty() ? QString() : recovery_file_for(recovery_dir_, model_.file_path());
+}
+
+void MainWindow::on_history_changed() {
+  if (recovery_dir_.isEmpty() || offering_) return;
+  if (model_.modified()) autosave_timer_->start();  // again from zero at every edit
+  else {
+    // Back at the saved state (or a project just opened): nothing of this window's to recover. A recovery of a
+    // project being opened is left for open_file() to offer.
+    autosave_timer_->stop();
+    if (!written_recovery_.isEmpty()) QFile::remove(written_recovery_);
+    written_recovery_.clear();
+  }
+}
+
+bool MainWindow::autosave_now() {
+  autosave_timer_->stop();
+  if (recovery_dir_.isEmpty() || !model_.modified()) return false;
+  const QString file = recovery_file();
+  if (!written_recovery_.isEmpty() && written_recovery_ != file) QFile::remove(written_recovery_);
+  if (auto err = write_recovery(recovery_dir_, model_.file_path(), model_.project_text(), QDateTime::currentDateTime())) {
+    statusBar()->showMessage(tr("The recovery copy could not be written: %1").arg(q(*err)), 8000);
+    return false;
+  }
+  written_recovery_ = file;
+  return true;
+}
+
+void MainWindow::remove_recovery() {
+  autosave_timer_->stop();
+  if (!written_recovery_.isEmpty()) QFile::remove(written_recovery_);
+  if (const QString f = recovery_file(); !f.isEmpty()) QFile::remove(f);
+  written_recovery_.clear();
+}
+
+bool MainWindow::offer_recovery() {
+  if (recovery_dir_.isEmpty()) return false;
+  const std::vector<RecoveryFile> found = find_recoveries(recovery_dir_);
+  return !found.empty() && offer(found.front());
+}
+
+bool MainWindow::offer(const RecoveryFile& r) {
+  const QString name = r.project_path.isEmpty() ? tr("an untitled project") : r.project_path;
+  bool restore = false;
+  if (ask_recovery_) restore = ask_recovery_(r);
+  else {
+    QMessageBox box(QMessageBox::Question, tr("Unsaved changes found"),
+                    tr("Rackreach was not closed cleanly. Unsaved changes to %1 were kept at %2.")
+                        .arg(name, QLocale().toString(r.written, QLocale::LongFormat)),
+                    QMessageBox::NoButton, this);
+    QPushButton* restore_button = box.addButton(tr("&Restore the changes"), QMessageBox::AcceptRole);
+    box.addButton(tr("&Discard them"), QMessageBox::DestructiveRole);
+    box.setDefaultButton(restore_button);
+    box.exec();
+    restore = box.clickedButton() == restore_button;
+  }
+  if (!restore) {
+    QFile::remove(r.file);
+    return false;
+  }
+  LoadResult loaded = load_project_text(r.project_text);
+  if (!loaded.project) {
+    QStringList lines;
+    for (const Problem& p : loaded.problems) lines << q(format_problem(r.file.toStdString(), p));
+    show_problems(tr("The recovery copy could not be read; it is kept at %1").arg(r.file), lines);
+    return false;
+  }
+  offering_ = true;
+  model_.set_project(std::move(*loaded.project), r.project_path);
+  model_.mark_unsaved();
+  offering_ = false;
+  written_recovery_ = r.file;  // kept until saved or discarded
+  selected_.reset();
+  select_slot(std::nullopt);
+  if (rack_list_->count() > 0) rack_list_->setCurrentRow(0);
+  statusBar()->showMessage(tr("Restored the unsaved changes of %1 (kept %2); save to keep them.")
+                               .arg(name, QLocale().toString(r.written, QLocale::ShortFormat)));
+  return true;
 }
 
 void MainWindow::closeEvent(QCloseEvent* e) {
@@ -461,6 +639,7 @@ std::optional<QString> MainWindow::save_to(const QString& path) {
     return why;
   }
   add_recent(path);
+  remove_recovery();
   statusBar()->showMessage(tr("Saved %1").arg(path), 5000);
   return std::nullopt;
 }
@@ -492,26 +671,102 @@ void MainWindow::on_import_csv() {
   const QString slots = QFileDialog::getOpenFileName(this, tr("Slot list (CSV)"), QFileInfo(parts).absolutePath(),
                                                      tr("CSV (*.csv)"));
   if (slots.isEmpty()) return;
-  CsvOptions options;
-  options.units = model_.units();
-  CsvImport r = import_store_csv(parts.toStdString(), slots.toStdString(), model_.units(), options);
-  if (!r.ok()) {
-    QStringList lines;
-    for (const Problem& p : r.problems) lines << q(format_problem(p));
-    show_problems(tr("Nothing was imported"), lines);
-    return;
+  import_csv_files(parts, slots);
+}
+
+bool MainWindow::import_csv_files(const QString& parts_file, const QString& slots_file) {
+  autosave_now();  // a long dialog: the edits so far are safe first
+  CsvImportDialog dialog(model_, parts_file, slots_file, this);
+  if (dialog.exec() != QDialog::Accepted || !dialog.can_import()) {
+    statusBar()->showMessage(tr("Nothing was imported."), 5000);
+    return false;
   }
-  for (const Slot& s : r.slots) {
-    const Rack* rack = model_.project().store.find_rack(s.rack);
-    if (!rack || !model_.project().store.find_level(*rack, s.level)) {
-      show_problems(tr("Nothing was imported"),
-                    {tr("slot %1: rack %2 level %3 is not in the project; add the racks first").arg(q(s.id), q(s.rack),
-                                                                                                  q(s.level))});
-      return;
-    }
-  }
+  CsvImport r = dialog.result();
   model_.undo_stack()->push(new ReplaceStoreItemsCommand(model_, std::move(r.parts), std::move(r.slots),
                                                          tr("Import parts and slots from CSV")));
+  select_slot(std::nullopt);
+  statusBar()->showMessage(tr("Imported %1 parts and %2 slots.").arg(model_.project().store.parts.size())
+                               .arg(model_.project().store.slots.size()), 5000);
+  return true;
+}
+
+void MainWindow::on_edit_rack(bool add) {
+  const auto& racks = model_.project().store.racks;
+  std::optional<std::size_t> index;
+  if (!add) {
+    if (rack_view_->rack() < 0 || static_cast<std::size_t>(rack_view_->rack()) >= racks.size()) {
+      statusBar()->showMessage(tr("Choose a rack in the rack list first."), 5000);
+      return;
+    }
+    index = static_cast<std::size_t>(rack_view_->rack());
+  }
+  autosave_now();
+  RackDialog d(model_, index, this);
+  if (d.exec() != QDialog::Accepted) return;
+  const QString text = add ? tr("Add rack %1").arg(d.id_edit()->text()) : tr("Edit rack %1").arg(d.id_edit()->text());
+  model_.undo_stack()->push(new SetStoreCommand(model_, d.result(), text));
+}
+
+void MainWindow::on_remove_rack() {
+  const auto& racks = model_.project().store.racks;
+  const int i = rack_view_->rack();
+  if (i < 0 || static_cast<std::size_t>(i) >= racks.size()) return;
+  const QString id = q(racks[static_cast<std::size_t>(i)].id);
+  if (const QString why = remove_rack_refusal(static_cast<std::size_t>(i)); !why.isEmpty()) {
+    QMessageBox::warning(this, tr("Rack not removed"), why);
+    return;
+  }
+  select_slot(std::nullopt);
+  model_.undo_stack()->push(new SetStoreCommand(model_, model_.store_without_rack(static_cast<std::size_t>(i)),
+                                                tr("Remove rack %1").arg(id)));
+}
+
+QString MainWindow::remove_rack_refusal(std::size_t index) const {
+  const std::vector<Problem> p = model_.check_store(model_.store_without_rack(index));
+  return p.empty() ? QString() : tr("Not removed (the project file's rules): %1").arg(q(ProjectModel::describe_problems(p)));
+}
+
+std::optional<std::size_t> MainWindow::choose_zone(const QString& title) {
+  const auto& zones = model_.project().store.zones;
+  if (zones.empty()) {
+    statusBar()->showMessage(tr("The store has no zones."), 5000);
+    return std::nullopt;
+  }
+  QStringList ids;
+  for (const Zone& z : zones) ids << q(z.id);
+  int current = 0;  // the shown rack's zone first
+  if (const int r = rack_view_->rack(); r >= 0 && static_cast<std::size_t>(r) < model_.project().store.racks.size())
+    current = std::max(0, static_cast<int>(ids.indexOf(q(model_.project().store.racks[static_cast<std::size_t>(r)].zone))));
+  if (zones.size() == 1) return 0;
+  bool ok = false;
+  const QString id = QInputDialog::getItem(this, title, tr("Zone:"), ids, current, false, &ok);
+  if (!ok) return std::nullopt;
+  return static_cast<std::size_t>(ids.indexOf(id));
+}
+
+void MainWindow::on_edit_zone(bool add) {
+  std::optional<std::size_t> index;
+  if (!add) {
+    index = choose_zone(tr("Edit zone"));
+    if (!index) return;
+  }
+  autosave_now();
+  ZoneDialog d(model_, index, this);
+  if (d.exec() != QDialog::Accepted) return;
+  model_.undo_stack()->push(new SetStoreCommand(model_, d.result(), (add ? tr("Add zone %1") : tr("Edit zone %1"))
+                                                                        .arg(d.id_edit()->text())));
+}
+
+void MainWindow::on_remove_zone() {
+  const auto index = choose_zone(tr("Remove zone"));
+  if (!index) return;
+  const Store s = model_.store_without_zone(*index);
+  if (const std::vector<Problem> p = model_.check_store(s); !p.empty()) {
+    QMessageBox::warning(this, tr("Zone not removed"),
+                         tr("Not removed (the project file's rules): %1").arg(q(ProjectModel::describe_problems(p))));
+    return;
+  }
+  model_.undo_stack()->push(new SetStoreCommand(model_, s, tr("Remove zone %1").arg(q(model_.project().store.zones[*index].id))));
 }
 
 void MainWindow::on_export(bool html) {
@@ -560,21 +815,26 @@ void MainWindow::on_add_slot() {
   s.part = store.parts.front().id;
   s.rack = store.racks.front().id;
   s.level = store.racks.front().levels.empty() ? "" : store.racks.front().levels.front().id;
-  // The first free place of the first rack.
+  // The first free place of the store (a quick look at which places are held), then the loader's check.
+  std::set<std::tuple<std::string, std::string, int, int>> held;
+  for (const Slot& o : store.slots) held.emplace(o.rack, o.level, o.bay, static_cast<int>(o.position));
   for (const Rack& r : store.racks)
     for (const Level& l : r.levels)
       for (int b = 1; b <= r.bays; ++b)
         for (SlotPosition p : {SlotPosition::front, SlotPosition::back}) {
+          if (held.count({r.id, l.id, b, static_cast<int>(p)})) continue;
           Slot t = s;
           t.rack = r.id, t.level = l.id, t.bay = b, t.position = p;
-          if (model_.validate_slot(t, std::nullopt).empty()) {
-            model_.undo_stack()->push(new InsertSlotCommand(model_, store.slots.size(), t, false,
-                                                            tr("Add slot %1").arg(q(t.id))));
-            select_slot(store.slots.size() - 1);
+          if (const std::string why = model_.validate_slot(t, std::nullopt); !why.empty()) {
+            statusBar()->showMessage(tr("Not added: %1").arg(q(why)), 8000);
             return;
           }
+          model_.undo_stack()->push(new InsertSlotCommand(model_, store.slots.size(), t, false,
+                                                          tr("Add slot %1").arg(q(t.id))));
+          select_slot(store.slots.size() - 1);
+          return;
         }
-  statusBar()->showMessage(tr("Not added: %1").arg(q(model_.validate_slot(s, std::nullopt))), 8000);
+  statusBar()->showMessage(tr("Not added: every place of the store's racks holds a slot."), 8000);
 }
 
 void MainWindow::on_remove_slot() {

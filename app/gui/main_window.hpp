@@ -6,10 +6,12 @@
 
 #include <QMainWindow>
 
+#include <functional>
 #include <map>
 #include <optional>
 
 #include "app/gui/project_model.hpp"
+#include "app/gui/recovery.hpp"
 
 class QAction;
 class QComboBox;
@@ -18,6 +20,7 @@ class QListWidget;
 class QMenu;
 class QTableView;
 class QTabWidget;
+class QTimer;
 
 namespace rackreach::gui {
 
@@ -36,6 +39,8 @@ class MainWindow : public QMainWindow {
  public:
   /// `remember` false: window state and recent files are neither read nor written (tests, screenshots).
   explicit MainWindow(bool remember = true, QWidget* parent = nullptr);
+  /// Leaves files as they are (a recovery file stays until a clean save or a discard).
+  ~MainWindow() override;
 
   ProjectModel& model() { return model_; }
   /// Opens a project file; on failure shows nothing and returns the problems, formatted.
@@ -56,6 +61,25 @@ class MainWindow : public QMainWindow {
   /// The View > Units action of a choice (checked when it is the one shown).
   QAction* units_action(DisplayChoice c) const { return units_actions_.at(c); }
 
+  // Recovery of unsaved edits (recovery.hpp). Off while the folder is empty (the default with `remember` false).
+  void set_recovery_dir(const QString& dir) { recovery_dir_ = dir; }
+  QString recovery_dir() const { return recovery_dir_; }
+  /// Seconds of no editing after which unsaved edits are written to the recovery file.
+  void set_autosave_delay_ms(int ms);
+  /// Writes the recovery file now if there are unsaved edits; false if nothing was written.
+  bool autosave_now();
+  /// The recovery file of the project as it is now named.
+  QString recovery_file() const;
+  /// What to do with a recovery found: true restores it, false discards it. Default: asks with a message box.
+  void set_recovery_question(std::function<bool(const RecoveryFile&)> ask) { ask_recovery_ = std::move(ask); }
+  /// At start without a project: offers the newest recovery of the folder, if any. True if one was restored.
+  bool offer_recovery();
+
+  /// Imports a part master and a slot list through the preview dialog (CsvImportDialog); true if imported.
+  bool import_csv_files(const QString& parts_file, const QString& slots_file);
+  /// Why the rack at `index` cannot be removed (the loader's message), or "".
+  QString remove_rack_refusal(std::size_t index) const;
+
  protected:
   void closeEvent(QCloseEvent* e) override;
 
@@ -70,6 +94,11 @@ class MainWindow : public QMainWindow {
   bool on_save();
   bool on_save_as();
   void on_import_csv();
+  void on_edit_rack(bool add);
+  void on_remove_rack();
+  void on_edit_zone(bool add);
+  void on_remove_zone();
+  std::optional<std::size_t> choose_zone(const QString& title);
   void on_export(bool html);
   void on_add_slot();
   void on_remove_slot();
@@ -79,6 +108,11 @@ class MainWindow : public QMainWindow {
   void apply_filter();
   void show_problems(const QString& title, const QStringList& lines);
   void on_display_changed();
+  void on_history_changed();
+  void step_finding(int by);
+  /// Offers `r` back; restores it into the model (marked unsaved) or removes it.
+  bool offer(const RecoveryFile& r);
+  void remove_recovery();
 
   ProjectModel model_;
   bool remember_;
@@ -106,6 +140,11 @@ class MainWindow : public QMainWindow {
   QMenu* recent_menu_ = nullptr;
   std::map<DisplayChoice, QAction*> units_actions_;
   QLabel* units_label_ = nullptr;
+  QString recovery_dir_;
+  QTimer* autosave_timer_ = nullptr;
+  QString written_recovery_;  ///< the recovery file this window last wrote
+  std::function<bool(const RecoveryFile&)> ask_recovery_;
+  bool offering_ = false;     ///< while a recovery is put back (its own open is not offered again)
 };
 
 }  // namespace rackreach::gui

@@ -26,11 +26,17 @@ std::vector<Problem> ProjectModel::open(const QString& path) {
 std::vector<Problem> ProjectModel::set_project(Project project, const QString& path) {
   project_ = std::move(project);
   path_ = path;
+  restored_ = false;
   undo_.clear();
   load_reach();
   reassess();
   Q_EMIT file_changed();
   return {};
+}
+
+void ProjectModel::mark_unsaved() {
+  restored_ = true;
+  Q_EMIT file_changed();
 }
 
 void ProjectModel::set_display_choice(DisplayChoice choice) {
@@ -50,6 +56,7 @@ std::string ProjectModel::project_text() const { return save_project_text(projec
 std::optional<std::string> ProjectModel::save_as(const QString& path) {
   if (auto err = write_file_atomically(path.toStdString(), project_text())) return err;
   path_ = path;
+  restored_ = false;
   undo_.setClean();
   Q_EMIT file_changed();
   return std::nullopt;
@@ -72,16 +79,32 @@ void ProjectModel::load_reach() {
 
 void ProjectModel::reassess() {
   if (!reach_ && assess_problems_.empty() && project_.has_shelf_geometry()) load_reach();
-  AssessOptions options;
-  options.reach = reach_;
-  assessment_ = assess_project(project_, options);
+  reviewer_.reset();  // it points into options_
+  options_ = AssessOptions{};
+  options_.reach = reach_;
+  reviewer_ = std::make_unique<StoreReviewer>(project_.units, make_review_options(options_, project_.duration_rule));
+  assessment_ = assess_project(project_, options_, *reviewer_);
+  index_findings();
+  Q_EMIT changed();
+}
+
+void ProjectModel::reassess_store(const std::vector<StoreEdit>& edits) {
+  if (!reviewer_ || !assessment_.store || project_.store.slots.empty()) {
+    reassess();
+    return;
+  }
+  reviewer_->update(*assessment_.store, project_.store, edits);
+  index_findings();
+  Q_EMIT changed();
+}
+
+void ProjectModel::index_findings() {
   finding_of_slot_.assign(project_.store.slots.size(), -1);
   if (assessment_.store) {
     const auto& f = assessment_.store->findings;
     for (std::size_t i = 0; i < f.size(); ++i)
       if (f[i].slot_index < finding_of_slot_.size()) finding_of_slot_[f[i].slot_index] = static_cast<int>(i);
   }
-  Q_EMIT changed();
 }
 
 const SlotFinding* ProjectModel::find_finding(std::size_t slot_index) const {
@@ -151,13 +174,30 @@ void ProjectModel::replace_part(std::size_t index, Part part) {
     for (Slot& s : project_.store.slots)
       if (s.part == old_id) s.part = part.id;
   project_.store.parts[index] = std::move(part);
-  reassess();
+  if (old_id != project_.store.parts[index].id) reassess();
+  else reassess_store({{StoreEdit::Kind::part, index}});
 }
 
 void ProjectModel::replace_slot(std::size_t index, Slot slot) {
   if (index >= project_.store.slots.size()) return;
-  project_.store.slots[index] = std::move(slot);
-  reassess();
+  replace_slots({{index, std::move(slot)}});
+}
+
+void ProjectModel::replace_slots(const std::vector<std::pair<std::size_t, Slot>>& slots) {
+  std::vector<StoreEdit> edits;
+  bool renamed = false;
+  for (const auto& [index, slot] : slots) {
+    if (index >= project_.store.slots.size()) continue;
+    const std::string old_id = project_.store.slots[index].id;
+    if (old_id != slot.id) {  // a renamed slot stays on its routes
+      renamed = true;
+      for (Route& r : project_.store.routes) std::replace(r.slots.begin(), r.slots.end(), old_id, slot.id);
+    }
+    project_.store.slots[index] = slot;
+    edits.push_back({StoreEdit::Kind::slot, index});
+  }
+  if (renamed) reassess();  // routes name slots by id
+  else reassess_store(edits);
 }
 
 void ProjectModel::insert_slot(std::size_t index, Slot slot, const std::vector<Route>* routes) {
@@ -215,38 +255,106 @@ void ProjectModel::remove_job(std::size_t index) {
   reassess();
 }
 
+std::vector<Problem> ProjectModel::check_as_file(const Project& candidate) const {
+  return load_project_text(save_project_text(candidate)).problems;
+}
+
+std::vector<Problem> ProjectModel::check_store(const Store& store) const {
+  Project p;  // the project without its store, then the candidate store: no copy of the current store
+  p.format_version = project_.format_version;
+  p.units = project_.units;
+  p.info = project_.info;
+  p.duration_rule = project_.duration_rule;
+  p.workforce = project_.workforce;
+  p.workforce_given = project_.workforce_given;
+  p.reach_parameters = project_.reach_parameters;
+  p.reach_parameters_set = project_.reach_parameters_set;
+  p.jobs = project_.jobs;
+  p.store = store;
+  return check_as_file(p);
+}
+
+std::string ProjectModel::describe_problems(const std::vector<Problem>& problems, std::size_t max) {
+  std::string out;
+  for (std::size_t i = 0; i < problems.size() && i < max; ++i)
+    out += (out.empty() ? "" : "; ") + format_problem("project", problems[i]);
+  if (problems.size() > max) out += "; and " + std::to_string(problems.size() - max) + " more";
+  return out;
+}
+
 std::string ProjectModel::validate_slot(const Slot& slot, std::optional<std::size_t> replacing) const {
-  const Store& s = project_.store;
   if (slot.id.empty()) return "a slot needs an id";
-  for (std::size_t i = 0; i < s.slots.size(); ++i)
-    if (s.slots[i].id == slot.id && (!replacing || *replacing != i)) return "slot id \"" + slot.id + "\" is taken";
-  if (!s.find_part(slot.part)) return "there is no part \"" + slot.part + "\"";
-  const Rack* rack = s.find_rack(slot.rack);
-  if (!rack) return "there is no rack \"" + slot.rack + "\"";
-  if (!s.find_level(*rack, slot.level)) return "rack " + rack->id + " has no level \"" + slot.level + "\"";
-  if (slot.bay < 1 || slot.bay > rack->bays)
-    return "rack " + rack->id + " has bays 1 to " + std::to_string(rack->bays) + " (it is " +
-           std::to_string(slot.bay) + ")";
-  for (std::size_t i = 0; i < s.slots.size(); ++i) {
-    const Slot& o = s.slots[i];
-    if ((!replacing || *replacing != i) && o.rack == slot.rack && o.level == slot.level && o.bay == slot.bay &&
-        o.position == slot.position)
-      return "that place is held by slot " + o.id;
+  Store s = project_.store;
+  if (replacing && *replacing < s.slots.size()) {
+    const std::string old_id = s.slots[*replacing].id;
+    if (old_id != slot.id)
+      for (Route& r : s.routes) std::replace(r.slots.begin(), r.slots.end(), old_id, slot.id);
+    s.slots[*replacing] = slot;
+  } else {
+    s.slots.push_back(slot);
   }
-  return {};
+  return describe_problems(check_store(s));
 }
 
 std::string ProjectModel::validate_part(const Part& part, std::optional<std::size_t> replacing) const {
-  const Store& s = project_.store;
   if (part.id.empty()) return "a part needs an id";
-  for (std::size_t i = 0; i < s.parts.size(); ++i)
-    if (s.parts[i].id == part.id && (!replacing || *replacing != i)) return "part id \"" + part.id + "\" is taken";
-  const std::string m(mass_unit(project_.units)), l(length_unit(project_.units));
-  if (!(part.unit_weight > 0.0) || !std::isfinite(part.unit_weight)) return "unit weight must be above 0 " + m;
-  if (!(part.box.width > 0.0) || !(part.box.depth > 0.0) || !(part.box.height > 0.0))
-    return "box width, depth and height must be above 0 " + l;
-  if (!(part.pieces_per_kit > 0.0) || !(part.pieces_per_grasp > 0.0)) return "pieces per kit and per grasp must be above 0";
-  return {};
+  Store s = project_.store;
+  if (replacing && *replacing < s.parts.size()) {
+    const std::string old_id = s.parts[*replacing].id;
+    if (old_id != part.id)
+      for (Slot& sl : s.slots)
+        if (sl.part == old_id) sl.part = part.id;
+    s.parts[*replacing] = part;
+  } else {
+    s.parts.push_back(part);
+  }
+  return describe_problems(check_store(s));
+}
+
+Store ProjectModel::store_with_rack(std::optional<std::size_t> index, const Rack& rack) const {
+  Store s = project_.store;
+  if (index && *index < s.racks.size()) {
+    const std::string old_id = s.racks[*index].id;
+    if (old_id != rack.id)
+      for (Slot& sl : s.slots)
+        if (sl.rack == old_id) sl.rack = rack.id;
+    s.racks[*index] = rack;
+  } else {
+    s.racks.push_back(rack);
+  }
+  return s;
+}
+
+Store ProjectModel::store_without_rack(std::size_t index) const {
+  Store s = project_.store;
+  if (index < s.racks.size()) s.racks.erase(s.racks.begin() + static_cast<std::ptrdiff_t>(index));
+  return s;
+}
+
+Store ProjectModel::store_with_zone(std::optional<std::size_t> index, const Zone& zone) const {
+  Store s = project_.store;
+  if (index && *index < s.zones.size()) {
+    const std::string old_id = s.zones[*index].id;
+    if (old_id != zone.id)
+      for (Rack& r : s.racks)
+        if (r.zone == old_id) r.zone = zone.id;
+    s.zones[*index] = zone;
+  } else {
+    s.zones.push_back(zone);
+  }
+  return s;
+}
+
+Store ProjectModel::store_without_zone(std::size_t index) const {
+  Store s = project_.store;
+  if (index < s.zones.size()) s.zones.erase(s.zones.begin() + static_cast<std::ptrdiff_t>(index));
+  return s;
+}
+
+void ProjectModel::set_store(Store store) {
+  project_.store = std::move(store);
+  if (!reach_ && project_.has_shelf_geometry()) load_reach();
+  reassess();
 }
 
 }  // namespace rackreach::gui

@@ -8,6 +8,7 @@
 #include <QString>
 #include <QUndoStack>
 
+#include <memory>
 #include <optional>
 #include <string>
 #include <vector>
@@ -68,7 +69,9 @@ class ProjectModel : public QObject {
   /// Changes only what is shown; emits display_changed() when the choice differs.
   void set_display_choice(DisplayChoice choice);
   QString file_path() const { return path_; }
-  bool modified() const { return !undo_.isClean(); }
+  bool modified() const { return restored_ || !undo_.isClean(); }
+  /// Marks the project unsaved though its history is clean (a project restored from a recovery file).
+  void mark_unsaved();
   QUndoStack* undo_stack() { return &undo_; }
 
   /// The finding of a slot (index into Store::slots), or nullptr.
@@ -82,6 +85,8 @@ class ProjectModel : public QObject {
   // Edits. Called by the undo commands only (they keep the history); each reassesses and emits changed().
   void replace_part(std::size_t index, Part part);
   void replace_slot(std::size_t index, Slot slot);
+  /// Several slots at once (parts swapped between slots): one reassessment.
+  void replace_slots(const std::vector<std::pair<std::size_t, Slot>>& slots);
   /// `routes` set: the store's routes are put back as given (undoing a removal).
   void insert_slot(std::size_t index, Slot slot, const std::vector<Route>* routes = nullptr);
   void remove_slot(std::size_t index);
@@ -92,13 +97,36 @@ class ProjectModel : public QObject {
   void insert_job(std::size_t index, LiftJob job);
   void remove_job(std::size_t index);
 
-  /// Checks a slot against the store: its rack, level, bay and part exist and its id is unique; "" when it is fine.
+  /// The problems the project file's loader finds in `candidate` once written as a project file (the one set of
+  /// rules: an edit checked here can never make a file that does not load). Empty: it loads.
+  std::vector<Problem> check_as_file(const Project& candidate) const;
+  /// The same for the current project with another store.
+  std::vector<Problem> check_store(const Store& store) const;
+  /// The loader's problems of a candidate, formatted ("" when there are none); at most `max` of them.
+  static std::string describe_problems(const std::vector<Problem>& problems, std::size_t max = 3);
+
+  /// A slot put in place of slot `replacing` (or added), checked by the loader's rules; "" when it is fine.
   std::string validate_slot(const Slot& slot, std::optional<std::size_t> replacing) const;
-  /// Checks a part: id unique and present, weight and box positive; "" when it is fine.
+  /// A part put in place of part `replacing` (or added; a renamed part keeps its slots), checked by the loader.
   std::string validate_part(const Part& part, std::optional<std::size_t> replacing) const;
 
-  /// Runs the assessment again and emits changed(); the edits call it.
+  /// The store with rack `index` replaced by `rack` (or `rack` added when `index` is empty); the slots of a
+  /// renamed rack follow it.
+  Store store_with_rack(std::optional<std::size_t> index, const Rack& rack) const;
+  Store store_without_rack(std::size_t index) const;
+  /// The store with zone `index` replaced (or added); the racks of a renamed zone follow it.
+  Store store_with_zone(std::optional<std::size_t> index, const Zone& zone) const;
+  Store store_without_zone(std::size_t index) const;
+  /// Replaces the whole store (racks, levels, zones edited): a full reassessment. Called by SetStoreCommand.
+  void set_store(Store store);
+
+  /// Runs the whole assessment again and emits changed(); edits that the kept review cannot follow call it.
   void reassess();
+  /// Brings the store's review up to date after edits of parts or slots in place (only what depends on them is
+  /// evaluated again, see StoreReviewer) and emits changed().
+  void reassess_store(const std::vector<StoreEdit>& edits);
+  /// Slots the last reassessment evaluated (all of them after a whole one).
+  std::size_t last_slots_evaluated() const { return reviewer_ ? reviewer_->last_slots_evaluated() : 0; }
 
  Q_SIGNALS:
   void changed();
@@ -107,15 +135,19 @@ class ProjectModel : public QObject {
 
  private:
   void load_reach();
+  void index_findings();
 
   Project project_;
   QString path_;
   DisplayChoice display_choice_ = DisplayChoice::as_file;
   std::optional<ReachSetup> reach_;
   std::vector<Problem> assess_problems_;
+  AssessOptions options_;                   ///< the reviewer points into options_.reach
+  std::unique_ptr<StoreReviewer> reviewer_;  ///< keeps the store review's caches between edits
   ProjectAssessment assessment_;
   std::vector<int> finding_of_slot_;  ///< slot index -> finding index, -1 where none
   QUndoStack undo_;
+  bool restored_ = false;  ///< restored from a recovery file and not saved since
 };
 
 }  // namespace rackreach::gui

@@ -218,10 +218,8 @@ bool SlotsTableModel::swap_parts(std::size_t from, std::size_t to) {
   if (from >= slots.size() || to >= slots.size() || from == to) return false;
   Slot a = slots[from], b = slots[to];
   std::swap(a.part, b.part);
-  auto* macro = new QUndoCommand(tr("Move part %1 to slot %2").arg(q(slots[from].part), q(slots[to].id)));
-  new ReplaceSlotCommand(model_, from, std::move(a), QString(), macro);
-  new ReplaceSlotCommand(model_, to, std::move(b), QString(), macro);
-  model_.undo_stack()->push(macro);
+  const QString text = tr("Move part %1 to slot %2").arg(q(slots[from].part), q(slots[to].id));
+  model_.undo_stack()->push(new ReplaceSlotsCommand(model_, {{from, std::move(a)}, {to, std::move(b)}}, text));
   return true;
 }
 

@@ -245,6 +245,13 @@ void TaskForm::recheck() {
     label->setStyleSheet(bad ? "color: #8B0000" : "");
     if (auto e = edits_.find(key); e != edits_.end()) e->second->setStyleSheet(bad ? "border: 2px solid #8B0000" : "");
   }
+  if (QLabel* f = messages_.count("frequency") ? messages_["frequency"] : nullptr;
+      f && f->text().isEmpty() && editing_ && loaded_sample_ &&
+      edits_.at("frequency")->text().trimmed() == loaded_frequency_.trimmed())
+    f->setText(tr("from a sample: %1 lifts/min for %2 of %3 min (kept; typing another F replaces it)")
+                   .arg(loaded_sample_->lifts_per_min)
+                   .arg(loaded_sample_->lifting_min)
+                   .arg(loaded_sample_->sample_min));
   QStringList other;
   for (const std::string& s : check_.other_problems) other << q(s);
   other_problems_->setText(other.join('\n'));
@@ -321,6 +328,8 @@ void TaskForm::load_task(std::size_t job, std::size_t task) {
   edits_["load"]->setText(q(f.load));
   edits_["max_load"]->setText(q(f.max_load));
   edits_["frequency"]->setText(q(f.frequency));
+  loaded_frequency_ = q(f.frequency);
+  loaded_sample_ = task < jobs[job].details.size() ? jobs[job].details[task].frequency_sample : std::nullopt;
   if (duration_->findData("pattern") < 0 && f.duration == "pattern") duration_->addItem(tr("from the job's work pattern"), "pattern");
   duration_->setCurrentIndex(duration_->findData(q(f.duration)));
   coupling_->setCurrentIndex(coupling_->findData(q(f.coupling)));
@@ -367,7 +376,16 @@ void TaskForm::apply(bool as_new) {
   }
   LiftJob job = jobs[editing_->first];
   if (editing_->second >= job.tasks.size()) return;
-  job.tasks[editing_->second] = task;  // the task's shelf and sample details stay as they were
+  const std::size_t t = editing_->second;
+  job.tasks[t] = task;  // the task's shelf details stay as they were
+  // F given as a sample (lifts per minute over part of a sample period) stays a sample unless F itself was
+  // retyped; then the typed F is the task's and the sample no longer says where it came from.
+  if (t < job.details.size() && job.details[t].frequency_sample) {
+    if (edits_.at("frequency")->text().trimmed() != loaded_frequency_.trimmed())
+      job.details[t].frequency_sample.reset();
+    else
+      job.tasks[t].frequency_per_min = jobs[editing_->first].tasks[t].frequency_per_min;
+  }
   if (check_.job->declared_duration) {
     job.declared_duration = check_.job->declared_duration;
     job.work_pattern.clear();

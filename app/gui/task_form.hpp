@@ -40,6 +40,8 @@ class TaskForm : public QWidget {
   QString shown_li(LiftEnd end) const;
   QString shown_band() const;
   const TaskCheck& last_check() const { return check_; }
+  QPushButton* add_button() const { return add_button_; }
+  QPushButton* replace_button() const { return replace_button_; }
 
   /// Fills the form from task `task` of job `job` of the project.
   void load_task(std::size_t job, std::size_t task);
@@ -70,6 +72,8 @@ class TaskForm : public QWidget {
   TaskCheck check_;
   std::vector<WorkPeriod> pattern_;  ///< the work pattern of the job being edited, kept as it is
   std::optional<std::pair<std::size_t, std::size_t>> editing_;  ///< job and task being edited
+  QString loaded_frequency_;  ///< F as loaded: while it is not retyped, the task's frequency sample stays
+  std::optional<FrequencySample> loaded_sample_;  ///< the sample F came from, shown beside F
 };
 
 }  // namespace rackreach::gui

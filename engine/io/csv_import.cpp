@@ -404,6 +404,31 @@ constexpr std::size_t find_column(std::span<const CsvColumnSpec> specs, std::str
   throw "no such column";  // only ever evaluated at compile time
 }
 
+std::optional<std::size_t> find_name(std::span<const CsvColumnSpec> specs, std::string_view name) {
+  for (std::size_t i = 0; i < specs.size(); ++i) {
+    if (specs[i].name == name) return i;
+    for (auto a : split_names(specs[i].aliases))
+      if (a == name) return i;
+  }
+  return std::nullopt;
+}
+
+/// The column a normalised header names: whole first, then with a unit suffix split off (`suffix` set).
+std::optional<std::size_t> resolve_header(std::span<const CsvColumnSpec> specs, const std::string& name,
+                                          const UnitSuffix*& suffix) {
+  suffix = nullptr;
+  if (auto spec = find_name(specs, name)) return spec;
+  for (const UnitSuffix& us : unit_suffixes) {
+    const std::string tail = "_" + std::string(us.suffix);
+    if (name.size() <= tail.size() || name.compare(name.size() - tail.size(), tail.size(), tail) != 0) continue;
+    if (auto spec = find_name(specs, std::string_view(name).substr(0, name.size() - tail.size()))) {
+      suffix = &us;
+      return spec;
+    }
+  }
+  return std::nullopt;
+}
+
 struct MappedColumn {
   std::size_t index = 0;  ///< 0-based position in the file
   std::string header;     ///< as written in the file
@@ -430,21 +455,12 @@ class Table {
     for (std::size_t j = 0; j < header.cells.size(); ++j) {
       const std::string original(trim(header.cells[j].text));
       const std::string path = cell_path(header.cells[j].line, j + 1, original);
-      const std::string name = normalise_header(original);
+      const auto chosen = options_.column_names.find(j);
+      if (chosen != options_.column_names.end() && trim(chosen->second).empty()) continue;  // left out by the user
+      const std::string name = normalise_header(chosen != options_.column_names.end() ? chosen->second : original);
       FileUnit unit = FileUnit::none;
-      std::optional<std::size_t> spec = find_name(name);
       const UnitSuffix* suffix = nullptr;
-      if (!spec) {
-        for (const UnitSuffix& us : unit_suffixes) {
-          const std::string tail = "_" + std::string(us.suffix);
-          if (name.size() <= tail.size() || name.compare(name.size() - tail.size(), tail.size(), tail) != 0) continue;
-          spec = find_name(std::string_view(name).substr(0, name.size() - tail.size()));
-          if (spec) {
-            suffix = &us;
-            break;
-          }
-        }
-      }
+      std::optional<std::size_t> spec = resolve_header(specs_, name, suffix);
       if (!spec) {
         unknown_column(path, original, name);
         continue;
@@ -622,14 +638,6 @@ class Table {
   }
 
  private:
-  std::optional<std::size_t> find_name(std::string_view name) const {
-    for (std::size_t i = 0; i < specs_.size(); ++i) {
-      if (specs_[i].name == name) return i;
-      for (auto a : split_names(specs_[i].aliases))
-        if (a == name) return i;
-    }
-    return std::nullopt;
-  }
 
   void unknown_column(const std::string& path, const std::string& original, const std::string& name) {
     std::string suggestion;
@@ -893,8 +901,11 @@ SlotsCsv load_slots_csv(const std::string& file, UnitSystem project_units, const
 
 CsvImport import_store_csv(const std::string& parts_file, const std::string& slots_file, UnitSystem project_units,
                            const CsvOptions& options) {
-  PartsCsv parts = load_parts_csv(parts_file, project_units, options);
-  SlotsCsv slots = load_slots_csv(slots_file, project_units, options);
+  return check_store_csv(load_parts_csv(parts_file, project_units, options), parts_file,
+                         load_slots_csv(slots_file, project_units, options), slots_file);
+}
+
+CsvImport check_store_csv(PartsCsv parts, const std::string& parts_file, SlotsCsv slots, const std::string& slots_file) {
   CsvImport out;
   out.problems = std::move(parts.problems);
   out.warnings = std::move(parts.warnings);
@@ -993,6 +1004,30 @@ std::string write_slots_csv(const std::vector<Slot>& slots, UnitSystem units) {
                    opt_num(sl.origin_angle_deg), opt_num(sl.standing_distance)});
   }
   return s;
+}
+
+CsvPreview read_csv_preview(std::string_view text, const std::string& file_name, std::size_t max_rows) {
+  CsvPreview out;
+  const CsvText csv = read_csv(text, file_name);
+  const Body body = split_body(csv, "file", file_name, out.problems);
+  if (!body.header) return out;
+  for (const CsvCell& c : body.header->cells) out.header.emplace_back(trim(c.text));
+  out.total_rows = body.rows.size();
+  for (const CsvRecord* r : body.rows) {
+    if (out.rows.size() >= max_rows) break;
+    CsvPreview::Row row;
+    row.line = r->line;
+    for (const CsvCell& c : r->cells) row.cells.push_back(cell_value(c.text));
+    out.rows.push_back(std::move(row));
+  }
+  return out;
+}
+
+std::string match_csv_column(std::span<const CsvColumnSpec> columns, std::string_view header) {
+  const UnitSuffix* suffix = nullptr;
+  const auto spec = resolve_header(columns, normalise_header(trim(header)), suffix);
+  if (!spec) return {};
+  return std::string(columns[*spec].name) + (suffix ? "_" + std::string(suffix->suffix) : std::string());
 }
 
 }  // namespace rackreach

@@ -90,7 +90,9 @@
 // `write_file_atomically`. The CLI's `--units metric|us` sets `CsvOptions::units` (for headers without a unit) and
 // `--ignore-unknown-columns` sets `ignore_unknown_columns`.
 
+#include <map>
 #include <optional>
+#include <span>
 #include <string>
 #include <string_view>
 #include <vector>
@@ -162,7 +164,30 @@ struct CsvOptions {
   /// Columns the table does not know are errors (a typo must not pass silently); with this set they are skipped
   /// and reported in `warnings` instead.
   bool ignore_unknown_columns = false;
+  /// The user's choice of column (a preview's mapping): 0-based column of the file -> the name to read it by
+  /// instead of its header (a canonical name or alias, with a unit suffix where the column needs one, as a header
+  /// would be written), or "" to leave the column out. Columns not in the map are read by their header. Every rule
+  /// of the table applies to the names given here as to headers; problems still name the file's header.
+  std::map<std::size_t, std::string> column_names;
 };
+
+/// The start of a CSV file as it is, for a preview: the header's cells and the first rows (blank rows skipped),
+/// each with its line, or the problem that stops the file from being read.
+struct CsvPreview {
+  std::vector<std::string> header;
+  struct Row {
+    std::size_t line = 0;
+    std::vector<std::string> cells;
+  };
+  std::vector<Row> rows;          ///< at most the number asked for
+  std::size_t total_rows = 0;     ///< every row of the file after the header
+  std::vector<Problem> problems;  ///< parse_error, empty, file_error
+};
+CsvPreview read_csv_preview(std::string_view text, const std::string& file_name, std::size_t max_rows);
+
+/// The column a header names in `columns` (part_csv_columns or slot_csv_columns), as the import matches it: the
+/// canonical name with the header's unit suffix ("unit_weight_kg"), or "" when no column has that name.
+std::string match_csv_column(std::span<const CsvColumnSpec> columns, std::string_view header);
 
 /// A part master read from CSV. `parts` holds the rows without problems, in file order; the import succeeded only
 /// if `problems` is empty. Values are in the project's unit system.
@@ -209,6 +234,9 @@ SlotsCsv load_slots_csv_text(std::string_view text, const std::string& file_name
 /// calls.
 CsvImport import_store_csv(const std::string& parts_file, const std::string& slots_file, UnitSystem project_units,
                            const CsvOptions& options);
+/// The check import_store_csv() makes, on a part master and a slot list read separately (e.g. each with its own
+/// column mapping): every slot's part must be in the part master. The files' names are what problems name.
+CsvImport check_store_csv(PartsCsv parts, const std::string& parts_file, SlotsCsv slots, const std::string& slots_file);
 
 /// The part master as CSV with canonical, unit-suffixed headers (`unit_weight_kg`, `box.width_cm`, ... for
 /// metric; `_lb`, `_in` for us; `_deg` on angles); `units` is the unit system the parts are in. Numbers are written in

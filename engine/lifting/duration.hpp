@@ -45,6 +45,7 @@ inline constexpr double long_limit_min = 480.0;
 struct WorkPeriod {
   enum class Kind { lifting, recovery } kind = Kind::lifting;
   double minutes = 0.0;
+  bool operator==(const WorkPeriod&) const = default;
 };
 
 struct DurationAssessment {
@@ -52,6 +53,7 @@ struct DurationAssessment {
   double longest_lifting_min = 0.0;          ///< the longest run of lifting after the recovery rule joined periods
   DurationRule rule = DurationRule::edition_2021;
   std::string explanation;                   ///< how the category follows from the pattern, in plain words
+  bool operator==(const DurationAssessment&) const = default;
 };
 
 /// The duration category of a pattern of periods, in order of time.

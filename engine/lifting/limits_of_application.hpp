@@ -25,6 +25,7 @@ struct LimitsOfApplication {
   std::optional<double> floor_friction;          ///< foot-floor coefficient of friction
   std::optional<double> temperature_c;           ///< air temperature, degrees Celsius
   std::optional<double> humidity_pct;            ///< relative humidity, percent
+  bool operator==(const LimitsOfApplication&) const = default;
 };
 
 /// The manual's thresholds (Applications Manual 1.2), stored once.

@@ -81,6 +81,7 @@ struct Multiplier {
   double value = 1.0;
   double input_used = 0.0;  ///< H, V, D, A (deg) or F after the method's clamps; V for CM
   BoundaryRule rule = BoundaryRule::none;
+  bool operator==(const Multiplier&) const = default;
 };
 
 Multiplier calc_hm(double h, const RnleConstants& k);
@@ -93,6 +94,7 @@ struct LiftPoint {
   double h = 0.0;
   double v = 0.0;
   double a_deg = 0.0;
+  bool operator==(const LiftPoint&) const = default;
 };
 
 /// One lift task, in the unit system of its project.
@@ -108,6 +110,7 @@ struct LiftTask {
   LimitsOfApplication limits;
 
   double fili_load() const { return max_load.value_or(load); }
+  bool operator==(const LiftTask&) const = default;
 };
 
 
@@ -120,6 +123,7 @@ struct PointResult {
   std::optional<double> li;    ///< undefined where RWL = 0
   std::optional<double> fili;  ///< undefined where FIRWL = 0
   std::optional<double> stli;  ///< undefined where STRWL = 0
+  bool operator==(const PointResult&) const = default;
 };
 
 struct TaskResult {
@@ -133,6 +137,7 @@ struct TaskResult {
   std::vector<Warning> warnings;
 
   const PointResult& governing_point() const { return governing == LiftEnd::origin ? origin : destination; }
+  bool operator==(const TaskResult&) const = default;
 };
 
 /// Evaluates one end of a lift, given DM and FM, which are the same at both ends (D is the travel between them;

@@ -37,6 +37,7 @@ struct Warning {
   bool is_limit_of_application() const {
     return kind >= WarningKind::one_handed && kind <= WarningKind::duration_over_8h;
   }
+  bool operator==(const Warning&) const = default;
 };
 
 /// Stable code, e.g. "outside.HM.origin", "limit.one_handed", "flag.fili_above_1".

@@ -118,6 +118,7 @@ struct ReachCheck {
   bool advisory = false;                ///< a comfort zone, not a limit: never the worst failure
   std::vector<std::string> parameters;  ///< ReachParameters fields the check depends on
   std::string message;                  ///< one sentence for people
+  bool operator==(const ReachCheck&) const = default;
 };
 
 struct ReachResult {
@@ -134,6 +135,7 @@ struct ReachResult {
 
   /// The failed limit (not advisory) with the most negative margin; nullptr if every limit is met.
   const ReachCheck* find_worst_failure() const;
+  bool operator==(const ReachResult&) const = default;
 };
 
 /// A problem with a reach input: field name, value and rule.

@@ -2,6 +2,7 @@
 #include "engine/slotting/review.hpp"
 
 #include <algorithm>
+#include <charconv>
 #include <cmath>
 #include <cstdio>
 #include <limits>
@@ -35,10 +36,11 @@ namespace {
 /// a few distinct tasks; the VLI for many).
 constexpr std::size_t max_tasks_for_cli = 10;
 
+/// As printf's "%.*f" (std::to_chars gives the same digits, without printf's cost per call).
 std::string num(double x, int decimals = 1) {
-  char buf[48];
-  std::snprintf(buf, sizeof buf, "%.*f", decimals, x);
-  return buf;
+  char buf[400];
+  const auto r = std::to_chars(buf, buf + sizeof buf, x, std::chars_format::fixed, decimals);
+  return std::string(buf, r.ptr);
 }
 
 /// Where a part could sit: one level of one rack at one depth position (every slot there is alike).
@@ -52,7 +54,7 @@ struct Place {
 
 class Reviewer {
  public:
-  Reviewer(const Store& s, UnitSystem u, const ReviewOptions& o) : s_(s), u_(u), o_(o) {
+  Reviewer(const Store& s, UnitSystem u, const ReviewOptions& o) : s_(s), store_(&s), u_(u), o_(o) {
     for (const Part& p : s.parts) parts_.emplace(p.id, &p);
     for (const Rack& r : s.racks) racks_.emplace(r.id, &r);
     for (const Zone& z : s.zones) zones_.emplace(z.id, &z);
@@ -98,17 +100,108 @@ class Reviewer {
       out.warnings.push_back({WarningKind::duration_over_8h, LiftEnd::origin, 0.0, long_limit_hours,
                               "the shift has more than 8 h of lifting: " + out.shift_duration.explanation +
                                   "; zones without a lifting pattern of their own are outside the equation"});
+    index_store();
     out.findings.reserve(s_.slots.size());
-    std::unordered_map<std::string, std::size_t> finding_of_slot;
-    for (std::size_t i = 0; i < s_.slots.size(); ++i) {
-      out.findings.push_back(review_slot(i));
-      finding_of_slot.emplace(s_.slots[i].id, i);
-    }
-    decide_parts(out);
+    for (std::size_t i = 0; i < s_.slots.size(); ++i) out.findings.push_back(review_slot(i));
+    for (const Part& p : s_.parts) out.part_decisions.push_back(decide_part(p));
+    out.family_decisions = decide_families(out.part_decisions);
     out.level_limits = calc_level_limits();
-    for (const Route& r : s_.routes) out.routes.push_back(review_route(r, out.findings, finding_of_slot));
+    {
+      std::vector<const SlotFinding*> by_slot(out.findings.size());
+      for (const SlotFinding& f : out.findings) by_slot[f.slot_index] = &f;
+      for (const Route& r : s_.routes) out.routes.push_back(review_route(r, by_slot));
+    }
     rank(out.findings);
     return out;
+  }
+
+  /// The store this reviewer was made for, at the same address and with the same parts and slots (ids in order).
+  const Store* store() const { return store_; }
+
+  /// Brings a review of this reviewer's store up to date after part and slot edits in place (same index, same
+  /// id); returns false, changing nothing, when an edit is not of that kind (the caller reviews the whole store).
+  bool update(StoreReview& out, const std::vector<StoreEdit>& edits, std::size_t& evaluated) {
+    if (s_.parts.size() != part_ids_.size() || s_.slots.size() != slot_part_.size()) return false;
+    std::vector<std::size_t> parts_changed, slots_changed;  // part indexes whose own data changed; slot indexes
+    for (const StoreEdit& e : edits) {
+      if (e.kind == StoreEdit::Kind::everything) return false;
+      if (e.kind == StoreEdit::Kind::part) {
+        if (e.index >= s_.parts.size() || s_.parts[e.index].id != part_ids_[e.index]) return false;
+        parts_changed.push_back(e.index);
+      } else {
+        if (e.index >= s_.slots.size() || s_.slots[e.index].id != slot_ids_[e.index]) return false;
+        const Slot& sl = s_.slots[e.index];
+        const auto rack = racks_.find(sl.rack);
+        if (!parts_.count(sl.part) || rack == racks_.end() || !s_.find_level(*rack->second, sl.level)) return false;
+        slots_changed.push_back(e.index);
+      }
+    }
+    // Which slots are evaluated again, and which parts decided again.
+    std::vector<char> redo_slot(s_.slots.size(), 0);
+    std::set<std::size_t> redo_part;
+    for (std::size_t p : parts_changed) {
+      best_cache_.erase(part_ids_[p]);
+      redo_part.insert(p);
+      for (std::size_t i : slots_of_part_[part_ids_[p]]) redo_slot[i] = 1;
+    }
+    for (std::size_t i : slots_changed) {
+      redo_slot[i] = 1;
+      const Slot& sl = s_.slots[i];
+      const bool truck = is_truck_slot(sl);
+      // The part that leaves and the part that comes: their slot lists and truck-level counts.
+      redo_part.insert(part_index_.at(slot_part_[i]));
+      redo_part.insert(part_index_.at(sl.part));
+      if (slot_truck_[i]) --truck_slots_[slot_part_[i]];
+      if (truck) ++truck_slots_[sl.part];
+      auto& from = slots_of_part_[slot_part_[i]];
+      from.erase(std::find(from.begin(), from.end(), i));
+      auto& to = slots_of_part_[sl.part];
+      to.insert(std::lower_bound(to.begin(), to.end(), i), i);
+      slot_part_[i] = sl.part;
+      slot_truck_[i] = truck;
+    }
+    // The findings again, each replaced where it is and moved to its place in the ranking (a total order, see
+    // ranks_before): only the findings between its old and new rank move. Many at once: sorted again instead.
+    evaluated = 0;
+    std::vector<std::size_t> at;  // rank of each finding to evaluate again
+    for (std::size_t k = 0; k < out.findings.size(); ++k)
+      if (redo_slot[out.findings[k].slot_index]) at.push_back(k);
+    evaluated = at.size();
+    if (at.size() > 64) {
+      for (std::size_t k : at) out.findings[k] = review_slot(out.findings[k].slot_index);
+      rank(out.findings);
+    } else {
+      std::vector<std::size_t> slots;
+      for (std::size_t k : at) slots.push_back(out.findings[k].slot_index);
+      for (std::size_t i : slots) {
+        const auto it = std::find_if(out.findings.begin(), out.findings.end(),
+                                     [i](const SlotFinding& f) { return f.slot_index == i; });
+        *it = review_slot(i);
+        if (it != out.findings.begin() && ranks_before(*it, *(it - 1)))
+          std::rotate(std::upper_bound(out.findings.begin(), it, *it, ranks_before), it, it + 1);
+        else if (it + 1 != out.findings.end() && ranks_before(*(it + 1), *it))
+          std::rotate(it, it + 1, std::lower_bound(it + 1, out.findings.end(), *it, ranks_before));
+      }
+    }
+    bool families = false;
+    for (std::size_t p : redo_part) {
+      PartDecision d = decide_part(s_.parts[p]);
+      const PartDecision& old = out.part_decisions[p];
+      if (d.hand != old.hand || d.family != old.family) families = true;
+      out.part_decisions[p] = std::move(d);
+    }
+    if (families) out.family_decisions = decide_families(out.part_decisions);
+    // The routes that visit a slot evaluated again.
+    std::set<std::size_t> redo_route;
+    for (std::size_t i = 0; i < redo_slot.size(); ++i)
+      if (redo_slot[i])
+        for (std::size_t r : routes_of_slot_[i]) redo_route.insert(r);
+    if (!redo_route.empty()) {
+      std::vector<const SlotFinding*> by_slot(out.findings.size());
+      for (const SlotFinding& f : out.findings) by_slot[f.slot_index] = &f;
+      for (std::size_t r : redo_route) out.routes[r] = review_route(s_.routes[r], by_slot);
+    }
+    return true;
   }
 
  private:
@@ -206,7 +299,7 @@ class Reviewer {
   /// The hand places with the lowest LI for a part (front and back of every hand level), found once per part and
   /// kept: the remedies of its slot and its hand/truck decision both use them.
   const BestPlaces& best_hand_places(const Part& part) const {
-    if (auto it = best_cache_.find(&part); it != best_cache_.end()) return it->second;
+    if (auto it = best_cache_.find(part.id); it != best_cache_.end()) return it->second;
     BestPlaces best;
     const auto [lo, hi] = waist_zone();
     for (std::size_t i = 0; i < hand_places_.size(); ++i) {
@@ -220,7 +313,7 @@ class Reviewer {
       const bool in_waist = d.task.origin.v >= lo && d.task.origin.v <= hi;
       if (in_waist && (!best.waist.li || *r.li < *best.waist.li)) best.waist = {&pl, r.li};
     }
-    return best_cache_.emplace(&part, best).first->second;
+    return best_cache_.emplace(part.id, best).first->second;
   }
 
   /// Whether a lift from a place meets every reach limit. The answer depends only on the place, the grip height
@@ -357,40 +450,78 @@ class Reviewer {
                             {}, {}});
   }
 
-  void decide_parts(StoreReview& out) const {
-    std::map<std::string, std::size_t> family_index;
-    std::unordered_map<std::string, bool> on_truck_level;
-    for (const Slot& sl : s_.slots) {
-      const Rack& rack = *racks_.at(sl.rack);
-      if (s_.find_level(rack, sl.level)->access == LevelAccess::truck) on_truck_level[sl.part] = true;
+  bool is_truck_slot(const Slot& sl) const {
+    return s_.find_level(*racks_.at(sl.rack), sl.level)->access == LevelAccess::truck;
+  }
+
+  /// The indexes an update needs: slots of each part, parts by id, slots by id, routes of each slot, and how
+  /// many of each part's slots are on truck levels.
+  void index_store() {
+    part_ids_.clear();
+    part_index_.clear();
+    slots_of_part_.clear();
+    truck_slots_.clear();
+    for (std::size_t p = 0; p < s_.parts.size(); ++p) {
+      part_ids_.push_back(s_.parts[p].id);
+      part_index_.emplace(s_.parts[p].id, p);
     }
-    for (const Part& p : s_.parts) {
-      PartDecision d;
-      d.part_id = p.id;
-      d.family = p.family;
-      const Alternative& best = best_hand_places(p).any;
-      d.best_hand_li = best.li;
-      if (best.place) d.best_hand_slot = place_name(*best.place);
-      if (p.truck_only) {
-        d.hand = false;
-        d.reason = "truck only, as the file says";
-      } else if (!best.li || *best.li > o_.bands.elevated_above) {
-        d.hand = false;
-        d.reason = best.li ? "no hand slot gives LI 1.0 or below (best LI " + num(*best.li, 2) + " at " +
-                                 d.best_hand_slot + ")"
-                           : "no hand slot takes it within the equation";
-      } else {
-        d.hand = true;
-        d.reason = "LI " + num(*best.li, 2) + " at " + d.best_hand_slot +
-                   (on_truck_level.count(p.id) ? "; now slotted on a truck level" : "");
+    slot_ids_.clear();
+    slot_part_.clear();
+    slot_truck_.clear();
+    slot_of_id_.clear();
+    for (std::size_t i = 0; i < s_.slots.size(); ++i) {
+      const Slot& sl = s_.slots[i];
+      const bool truck = is_truck_slot(sl);
+      slot_ids_.push_back(sl.id);
+      slot_part_.push_back(sl.part);
+      slot_truck_.push_back(truck);
+      slot_of_id_.emplace(sl.id, i);
+      slots_of_part_[sl.part].push_back(i);
+      if (truck) ++truck_slots_[sl.part];
+    }
+    routes_of_slot_.assign(s_.slots.size(), {});
+    for (std::size_t r = 0; r < s_.routes.size(); ++r)
+      for (const std::string& id : s_.routes[r].slots) {
+        auto& list = routes_of_slot_[slot_of_id_.at(id)];
+        if (list.empty() || list.back() != r) list.push_back(r);
       }
-      auto [it, fresh] = family_index.emplace(p.family, out.family_decisions.size());
-      if (fresh) out.family_decisions.push_back({p.family, FamilyDecision::Pick::hand, {}, {}, {}});
-      FamilyDecision& fam = out.family_decisions[it->second];
-      (d.hand ? fam.hand_parts : fam.truck_parts).push_back(p.id);
-      out.part_decisions.push_back(std::move(d));
+  }
+
+  PartDecision decide_part(const Part& p) const {
+    PartDecision d;
+    d.part_id = p.id;
+    d.family = p.family;
+    const Alternative& best = best_hand_places(p).any;
+    d.best_hand_li = best.li;
+    if (best.place) d.best_hand_slot = place_name(*best.place);
+    if (p.truck_only) {
+      d.hand = false;
+      d.reason = "truck only, as the file says";
+    } else if (!best.li || *best.li > o_.bands.elevated_above) {
+      d.hand = false;
+      d.reason = best.li ? "no hand slot gives LI 1.0 or below (best LI " + num(*best.li, 2) + " at " +
+                               d.best_hand_slot + ")"
+                         : "no hand slot takes it within the equation";
+    } else {
+      d.hand = true;
+      const auto t = truck_slots_.find(p.id);
+      d.reason = "LI " + num(*best.li, 2) + " at " + d.best_hand_slot +
+                 (t != truck_slots_.end() && t->second > 0 ? "; now slotted on a truck level" : "");
     }
-    for (FamilyDecision& fam : out.family_decisions) {
+    return d;
+  }
+
+  /// Each family's pick from its parts' decisions, families in the order their first part comes.
+  static std::vector<FamilyDecision> decide_families(const std::vector<PartDecision>& parts) {
+    std::vector<FamilyDecision> out;
+    std::map<std::string, std::size_t> family_index;
+    for (const PartDecision& d : parts) {
+      auto [it, fresh] = family_index.emplace(d.family, out.size());
+      if (fresh) out.push_back({d.family, FamilyDecision::Pick::hand, {}, {}, {}});
+      FamilyDecision& fam = out[it->second];
+      (d.hand ? fam.hand_parts : fam.truck_parts).push_back(d.part_id);
+    }
+    for (FamilyDecision& fam : out) {
       fam.pick = fam.truck_parts.empty() ? FamilyDecision::Pick::hand
                  : fam.hand_parts.empty() ? FamilyDecision::Pick::truck
                                           : FamilyDecision::Pick::split;
@@ -400,6 +531,7 @@ class Reviewer {
                                                                    std::to_string(fam.truck_parts.size() + fam.hand_parts.size()) +
                                                                    " parts need truck access";
     }
+    return out;
   }
 
   std::vector<LevelLimit> calc_level_limits() const {
@@ -428,8 +560,7 @@ class Reviewer {
 
   /// A route's job index: the VLI over its picks (Waters et al. 2016; the category rule is named in the result),
   /// and the CLI as well where the route has few picks.
-  RouteResult review_route(const Route& route, const std::vector<SlotFinding>& findings,
-                           const std::unordered_map<std::string, std::size_t>& finding_of_slot) const {
+  RouteResult review_route(const Route& route, const std::vector<const SlotFinding*>& by_slot) const {
     RouteResult out;
     out.id = route.id;
     out.name = route.name;
@@ -437,7 +568,7 @@ class Reviewer {
     std::vector<VariableSubtask> subtasks;
     std::optional<DurationCategory> duration;
     for (const std::string& id : route.slots) {
-      const SlotFinding& f = findings[finding_of_slot.at(id)];
+      const SlotFinding& f = *by_slot[slot_of_id_.at(id)];
       items.push_back(make_composite_item(f.lift.task, f.result, u_));
       subtasks.push_back(make_variable_subtask(f.lift.task, f.result, u_));
       duration = duration_of(find_zone(*racks_.at(f.rack_id)));
@@ -455,18 +586,22 @@ class Reviewer {
     return out;
   }
 
-  static void rank(std::vector<SlotFinding>& findings) {
-    // Worst first: outside the equation, then by LI, then by frequency (exposure).
-    std::stable_sort(findings.begin(), findings.end(), [](const SlotFinding& a, const SlotFinding& b) {
-      if (a.truck_access != b.truck_access) return b.truck_access;
-      const double la = a.result.li.value_or(std::numeric_limits<double>::infinity());
-      const double lb = b.result.li.value_or(std::numeric_limits<double>::infinity());
-      if (la != lb) return la > lb;
+  /// The ranking: worst first (outside the equation, then by LI, then by frequency, i.e. exposure), truck
+  /// picks last, and the store's slot order among equals. A total order, so an updated finding has one place.
+  static bool ranks_before(const SlotFinding& a, const SlotFinding& b) {
+    if (a.truck_access != b.truck_access) return b.truck_access;
+    const double la = a.result.li.value_or(std::numeric_limits<double>::infinity());
+    const double lb = b.result.li.value_or(std::numeric_limits<double>::infinity());
+    if (la != lb) return la > lb;
+    if (a.lift.task.frequency_per_min != b.lift.task.frequency_per_min)
       return a.lift.task.frequency_per_min > b.lift.task.frequency_per_min;
-    });
+    return a.slot_index < b.slot_index;
   }
 
+  static void rank(std::vector<SlotFinding>& findings) { std::sort(findings.begin(), findings.end(), ranks_before); }
+
   const Store& s_;
+  const Store* store_;
   UnitSystem u_;
   const ReviewOptions& o_;
   std::unordered_map<std::string, const Part*> parts_;
@@ -474,14 +609,42 @@ class Reviewer {
   std::unordered_map<std::string, const Zone*> zones_;
   std::vector<WorkPeriod> shift_pattern_;
   std::vector<Place> hand_places_;
-  mutable std::unordered_map<const Part*, BestPlaces> best_cache_;
+  /// Per part id. A part that is not in the store (the reference box, a part placed by the re-slotting costs)
+  /// is never edited in place, so only the store's own parts are erased from it by update().
+  mutable std::unordered_map<std::string, BestPlaces> best_cache_;
   mutable std::map<std::tuple<std::size_t, double, double>, bool> reach_cache_;
+  // For update(): the store as last reviewed.
+  std::vector<std::string> part_ids_, slot_ids_, slot_part_;
+  std::vector<char> slot_truck_;
+  std::unordered_map<std::string, std::size_t> part_index_, slot_of_id_;
+  std::unordered_map<std::string, std::vector<std::size_t>> slots_of_part_;
+  std::unordered_map<std::string, int> truck_slots_;
+  std::vector<std::vector<std::size_t>> routes_of_slot_;
 };
 
 }  // namespace
 
 StoreReview review_store(const Store& store, UnitSystem units, const ReviewOptions& options) {
   return Reviewer(store, units, options).run();
+}
+
+class StoreReviewer::State : public Reviewer {
+ public:
+  using Reviewer::Reviewer;
+};
+
+StoreReviewer::StoreReviewer(UnitSystem units, const ReviewOptions& options) : units_(units), options_(options) {}
+StoreReviewer::~StoreReviewer() = default;
+
+StoreReview StoreReviewer::review(const Store& store) {
+  state_ = std::make_unique<State>(store, units_, options_);
+  last_slots_evaluated_ = store.slots.size();
+  return state_->run();
+}
+
+void StoreReviewer::update(StoreReview& review, const Store& store, const std::vector<StoreEdit>& edits) {
+  if (state_ && state_->store() == &store && state_->update(review, edits, last_slots_evaluated_)) return;
+  review = this->review(store);
 }
 
 class PlacementEvaluator::Impl {

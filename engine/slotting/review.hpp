@@ -33,6 +33,7 @@ struct DerivedLift {
   double grip_height = 0.0;       ///< above the box's base
   std::string coupling_reason;    ///< how the coupling class follows from the part (or "given in the file")
   double lifts_per_kit = 0.0;     ///< pieces per kit / pieces per grasp
+  bool operator==(const DerivedLift&) const = default;
 };
 
 enum class RemedyKind {
@@ -52,6 +53,7 @@ struct Remedy {
   std::string reason;             ///< plain words, with the numbers and their units
   std::optional<double> number;   ///< e.g. the largest unit weight that gives LI 1.0 (mass unit), or the LI after
   std::string target;             ///< e.g. the level to move to
+  bool operator==(const Remedy&) const = default;
 };
 
 struct SlotFinding {
@@ -64,6 +66,7 @@ struct SlotFinding {
   bool truck_access = false;      ///< on a truck-access level: picked by lift truck, not a manual lift
   std::vector<Remedy> remedies;
   std::vector<Warning> warnings;  ///< reach and fit findings beside the lift's own
+  bool operator==(const SlotFinding&) const = default;
 };
 
 /// Hand or truck picking for a part, and why.
@@ -73,6 +76,7 @@ struct PartDecision {
   std::optional<double> best_hand_li;  ///< the lowest LI of this part at any hand slot of the store
   std::string best_hand_slot;          ///< where (rack/level/position)
   std::string reason;
+  bool operator==(const PartDecision&) const = default;
 };
 
 struct FamilyDecision {
@@ -80,6 +84,7 @@ struct FamilyDecision {
   enum class Pick { hand, truck, split } pick = Pick::hand;
   std::vector<std::string> hand_parts, truck_parts;
   std::string reason;
+  bool operator==(const FamilyDecision&) const = default;
 };
 
 /// The heaviest load with LI <= 1 (the RWL) at one level and depth position for the reference box, per frequency.
@@ -89,6 +94,7 @@ struct LevelLimit {
   LevelAccess access = LevelAccess::hand;
   double v = 0.0, h = 0.0;
   std::vector<std::optional<double>> rwl;  ///< per Store::limit_frequencies_per_min; empty where RWL = 0
+  bool operator==(const LevelLimit&) const = default;
 };
 
 /// A slot's part in a route's job index.
@@ -97,6 +103,7 @@ struct RouteContribution {
   double frequency_per_min = 0.0;
   std::optional<double> fili, stli;
   double contribution = 0.0;  ///< how much the slot adds to the route's index (see variable_2016.hpp)
+  bool operator==(const RouteContribution&) const = default;
 };
 
 struct RouteResult {
@@ -106,6 +113,7 @@ struct RouteResult {
   std::optional<std::string> undefined_reason;
   std::string vli_rule;       ///< the category rule used, as the report names it
   std::vector<RouteContribution> contributions;  ///< largest first
+  bool operator==(const RouteResult&) const = default;
 };
 
 struct StoreReview {
@@ -116,6 +124,7 @@ struct StoreReview {
   std::vector<LevelLimit> level_limits;
   std::vector<RouteResult> routes;
   std::vector<Warning> warnings;                ///< store-level: shift over 8 h, ...
+  bool operator==(const StoreReview&) const = default;
 };
 
 struct ReviewOptions {
@@ -128,6 +137,43 @@ struct ReviewOptions {
 };
 
 StoreReview review_store(const Store& store, UnitSystem units, const ReviewOptions& options);
+
+/// One edit of a store since its last review: a part or a slot replaced in place (same index). Anything else
+/// (a slot or part added or removed, a part or slot renamed, racks, zones, routes, demand or shift changed) is
+/// `everything`.
+struct StoreEdit {
+  enum class Kind { part, slot, everything } kind = Kind::everything;
+  std::size_t index = 0;  ///< into Store::parts or Store::slots
+};
+
+/// A slot review that keeps what it found between edits, so that after a part or a slot edit only what depends
+/// on it is evaluated again: the lifts and findings of that part's slots (or of that slot), the part's best hand
+/// places, the part's and its family's decisions, the routes that visit those slots, and the ranking. The rest
+/// (level limits, other parts' places, reach verdicts per place and box geometry) is kept. update() gives
+/// exactly what review_store() gives for the edited store (the tests compare them field by field).
+class StoreReviewer {
+ public:
+  /// `options` is copied; the reach workers it points to must outlive the reviewer.
+  StoreReviewer(UnitSystem units, const ReviewOptions& options);
+  ~StoreReviewer();
+  StoreReviewer(const StoreReviewer&) = delete;
+  StoreReviewer& operator=(const StoreReviewer&) = delete;
+
+  /// A full review of `store`, as review_store(); keeps its caches for update().
+  StoreReview review(const Store& store);
+  /// Brings `review` (the last result of review() or update() of this reviewer) up to date with `store` after
+  /// `edits`. Edits of kind `everything`, or any edit the caches cannot follow, give a full review.
+  void update(StoreReview& review, const Store& store, const std::vector<StoreEdit>& edits);
+  /// How many slots the last update() evaluated again (all of them after a full review).
+  std::size_t last_slots_evaluated() const { return last_slots_evaluated_; }
+
+ private:
+  class State;
+  UnitSystem units_;
+  ReviewOptions options_;
+  std::unique_ptr<State> state_;
+  std::size_t last_slots_evaluated_ = 0;
+};
 
 /// A part placed at a slot's place (rack, level, position), derived and evaluated exactly as the review does.
 struct Placement {

@@ -30,6 +30,7 @@ constexpr const char* value_source_name(ValueSource s) {
 struct SourcedValue {
   double value = 0.0;
   ValueSource source = ValueSource::built_in_default;
+  bool operator==(const SourcedValue&) const = default;
 };
 
 /// Built-in defaults of a zone (our assumptions, shown with every result; override them in the file).
@@ -53,6 +54,7 @@ struct Zone {
   /// The zone's own lifting pattern (e.g. pickers rotate to other work); empty: the shift's.
   std::optional<std::vector<WorkPeriod>> lifting_pattern;
   LimitsOfApplication limits;
+  bool operator==(const Zone&) const = default;
 };
 
 enum class RackKind { hand, truck, mixed };
@@ -63,6 +65,7 @@ struct Level {
   double surface_height = 0.0;  ///< floor to the top of the shelf or beam the boxes stand on
   double clear_height = 0.0;    ///< free height above the surface, to the underside of the level above
   LevelAccess access = LevelAccess::hand;
+  bool operator==(const Level&) const = default;
 };
 
 struct Rack {
@@ -73,6 +76,7 @@ struct Rack {
   double shelf_depth = 0.0;
   int bays = 1;
   std::vector<Level> levels;  ///< from the floor up
+  bool operator==(const Rack&) const = default;
 };
 
 /// How the hands hold a box (Applications Manual Table 6), from which the coupling class is derived.
@@ -81,12 +85,14 @@ struct Handhold {
   HandholdKind kind = HandholdKind::none;
   bool optimal = false;          ///< handles 1.9-3.8 cm thick, >= 11.5 cm long, 5 cm clearance; cut-outs likewise
   bool fingers_flex_90 = false;  ///< without handles: can the fingers curl about 90 degrees under the box
+  bool operator==(const Handhold&) const = default;
 };
 
 struct Box {
   double width = 0.0;   ///< frontal length, across the picker
   double depth = 0.0;   ///< into the shelf
   double height = 0.0;
+  bool operator==(const Box&) const = default;
 };
 
 struct Part {
@@ -102,6 +108,7 @@ struct Part {
   int pack_pieces = 1;                ///< pieces in one pack (a box of 50 bolts); above 1 the pack can be split
   bool truck_only = false;            ///< the file says so (e.g. a pallet load)
   std::optional<double> grip_height;  ///< above the box's base; default half the box height
+  bool operator==(const Part&) const = default;
 };
 
 enum class SlotPosition { front, back };
@@ -116,6 +123,7 @@ struct Slot {
   bool fixed = false;  ///< stays where it is when re-slotting
   std::optional<double> origin_angle_deg;  ///< overrides the zone's
   std::optional<double> standing_distance; ///< overrides the zone's
+  bool operator==(const Slot&) const = default;
 };
 
 /// A picker's route: the slots picked for one kit, in order.
@@ -123,6 +131,7 @@ struct Route {
   std::string id;
   std::string name;
   std::vector<std::string> slots;
+  bool operator==(const Route&) const = default;
 };
 
 /// The shift: start and end (minutes after midnight; an end before the start is the next day) and breaks;
@@ -133,18 +142,21 @@ struct Shift {
   struct Break {
     int start_min = 0;
     double minutes = 0.0;
+    bool operator==(const Break&) const = default;
   };
   std::vector<Break> breaks;
 
   double length_min() const { return end_min > start_min ? end_min - start_min : end_min + 24 * 60 - start_min; }
   /// Lifting and recovery periods in order: work between breaks is lifting, breaks are recovery.
   std::vector<WorkPeriod> work_pattern() const;
+  bool operator==(const Shift&) const = default;
 };
 
 /// A reference box for the level-limits table (stated in the output).
 struct ReferenceBox {
   Box box;
   Coupling coupling = Coupling::fair;
+  bool operator==(const ReferenceBox&) const = default;
 };
 
 struct Store {
@@ -164,6 +176,7 @@ struct Store {
   const Rack* find_rack(const std::string& id) const;
   const Zone* find_zone(const std::string& id) const;
   const Level* find_level(const Rack& rack, const std::string& level_id) const;
+  bool operator==(const Store&) const = default;
 };
 
 }  // namespace rackreach
