@@ -41,4 +41,17 @@ LoadedReachSetup load_reach_setup(const Project& project, const std::filesystem:
   return out;
 }
 
+LoadedReachSetup load_reach_setup(const Project& project) {
+  const DataDirLookup data = find_data_dir();
+  if (!data.dir && is_shipped_name(project.workforce.population)) {
+    LoadedReachSetup out;
+    out.problems.push_back({"file_error", project.workforce_given ? "workforce.population" : "", "",
+                            "the reach checks need the population table \"" + project.workforce.population +
+                                "\": " + data.failure_message(),
+                            ""});
+    return out;
+  }
+  return load_reach_setup(project, data.dir.value_or(std::filesystem::path()));
+}
+
 }  // namespace rackreach

@@ -21,5 +21,8 @@ struct LoadedReachSetup {
 
 /// Loads the workforce of `project` from `data_dir` (shipped tables) or a file, and forms its two workers.
 LoadedReachSetup load_reach_setup(const Project& project, const std::filesystem::path& data_dir);
+/// The same from the data folder the programs use (find_data_dir()); when no folder holds tables and the project
+/// names a shipped table, the one problem names every place looked at.
+LoadedReachSetup load_reach_setup(const Project& project);
 
 }  // namespace rackreach

@@ -3,7 +3,6 @@
 
 #include <iostream>
 
-#include "anthropometry/data_dir.hpp"
 #include "anthropometry/reach_setup.hpp"
 #include "app/cli/commands.hpp"
 #include "engine/io/project_file.hpp"
@@ -26,16 +25,7 @@ std::optional<Project> load_or_report(const std::string& file, int& exit_code) {
 }
 
 std::optional<ReachSetup> load_reach_or_report(const std::string& file, const Project& project, int& exit_code) {
-  const DataDirLookup data = find_data_dir();
-  if (!data.dir && is_shipped_name(project.workforce.population)) {
-    print_problems(file, {{"file_error", project.workforce_given ? "workforce.population" : "", "",
-                           "the reach checks need the population table \"" + project.workforce.population +
-                               "\": " + data.failure_message(),
-                           ""}});
-    exit_code = exit_invalid_input;
-    return std::nullopt;
-  }
-  LoadedReachSetup reach = load_reach_setup(project, data.dir.value_or(std::filesystem::path()));
+  LoadedReachSetup reach = load_reach_setup(project);
   if (!reach.setup) {
     print_problems(file, reach.problems);
     exit_code = exit_invalid_input;

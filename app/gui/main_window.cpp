@@ -7,6 +7,7 @@
 #include <QCloseEvent>
 #include <QComboBox>
 #include <QFileDialog>
+#include <QFile>
 #include <QFileInfo>
 #include <QHBoxLayout>
 #include <QHeaderView>
@@ -39,6 +40,7 @@
 #include "app/gui/store_dialogs.hpp"
 #include "app/gui/store_tables.hpp"
 #include "app/gui/task_form.hpp"
+#include "app/report/report_writer.hpp"
 #include "engine/caution.hpp"
 #include "engine/io/atomic_file.hpp"
 #include "engine/io/csv_import.hpp"
@@ -273,7 +275,8 @@ void MainWindow::build_menus() {
   file->addAction(tr("&Import parts and slots from CSV..."), QKeySequence(tr("Ctrl+I")), this, &MainWindow::on_import_csv);
   file->addAction(tr("Export findings as &CSV..."), QKeySequence(tr("Ctrl+E")), this, [this] { on_export(false); });
   file->addAction(tr("Export findings as &HTML..."), QKeySequence(tr("Ctrl+Shift+E")), this, [this] { on_export(true); });
-  // ---- File > Export report: its action goes here, after the findings exports and before the separator. ----
+  file->addAction(tr("Export audit &report (PDF or HTML)..."), QKeySequence(tr("Ctrl+Shift+R")), this,
+                  &MainWindow::on_export_report);
   file->addSeparator();
   file->addAction(tr("&Quit"), QKeySequence::Quit, this, &QWidget::close);
 
@@ -783,6 +786,36 @@ void MainWindow::on_export(bool html) {
   if (auto err = write_file_atomically(path.toStdString(), text))
     QMessageBox::warning(this, tr("Not exported"), tr("%1: %2").arg(path, q(*err)));
   else statusBar()->showMessage(tr("Exported %1").arg(path), 5000);
+}
+
+QStringList MainWindow::export_report_to(const QString& path) {
+  if (model_.file_path().isEmpty() || model_.modified())
+    return {tr("The project has unsaved edits: save it first, so that the report's input hash names the saved file.")};
+  QFile in(model_.file_path());
+  if (!in.open(QIODevice::ReadOnly)) return {tr("%1: cannot be read: %2").arg(model_.file_path(), in.errorString())};
+  const QByteArray bytes = in.readAll();
+  const report::ReportSource source{QFileInfo(model_.file_path()).fileName().toStdString(), bytes.toStdString()};
+  const report::ReportResult r = report::write_report(model_.project(), source, path.toStdString(), {});
+  QStringList problems;
+  for (const std::string& p : r.problems) problems << q(p);
+  if (!r.written && problems.isEmpty()) problems << tr("%1: the report was not written").arg(path);
+  return problems;
+}
+
+void MainWindow::on_export_report() {
+  if (model_.file_path().isEmpty() || model_.modified()) {
+    const auto answer = QMessageBox::question(
+        this, tr("Save before the report"),
+        tr("The audit report records the SHA-256 of the project file on disk. Save the project now?"),
+        QMessageBox::Save | QMessageBox::Cancel, QMessageBox::Save);
+    if (answer != QMessageBox::Save || !on_save() || model_.modified()) return;
+  }
+  const QString path = QFileDialog::getSaveFileName(this, tr("Export audit report"), {},
+                                                    tr("PDF (*.pdf);;HTML (*.html)"));
+  if (path.isEmpty()) return;
+  const QStringList problems = export_report_to(path);
+  if (!problems.isEmpty()) show_problems(tr("Report not written"), problems);
+  else statusBar()->showMessage(tr("Wrote the audit report %1").arg(path), 5000);
 }
 
 void MainWindow::on_move_part() {

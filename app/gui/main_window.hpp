@@ -49,6 +49,10 @@ class MainWindow : public QMainWindow {
   std::optional<std::size_t> selected_slot() const { return selected_; }
   /// Saves to `path`; returns the reason on failure (also shown in the status bar).
   std::optional<QString> save_to(const QString& path);
+  /// Writes the audit report (PDF or HTML by the extension) of the saved project file, the same report as
+  /// `rackreach report`; returns the reasons on failure (nothing is written then). Unsaved edits are refused: the
+  /// report's input hash must name the file on disk.
+  QStringList export_report_to(const QString& path);
 
   RackView* rack_view() const { return rack_view_; }
   InspectorView* inspector() const { return inspector_; }
@@ -100,6 +104,7 @@ class MainWindow : public QMainWindow {
   void on_remove_zone();
   std::optional<std::size_t> choose_zone(const QString& title);
   void on_export(bool html);
+  void on_export_report();
   void on_add_slot();
   void on_remove_slot();
   void on_move_part();

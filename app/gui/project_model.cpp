@@ -5,7 +5,6 @@
 #include <cmath>
 #include <set>
 
-#include "anthropometry/data_dir.hpp"
 #include "anthropometry/reach_setup.hpp"
 #include "engine/io/atomic_file.hpp"
 #include "engine/io/project_file.hpp"
@@ -67,12 +66,7 @@ void ProjectModel::load_reach() {
   reach_.reset();
   assess_problems_.clear();
   if (!project_.has_shelf_geometry()) return;
-  const DataDirLookup data = find_data_dir();
-  if (!data.dir && is_shipped_name(project_.workforce.population)) {
-    assess_problems_.push_back({"file_error", "", "", data.failure_message(), ""});
-    return;
-  }
-  LoadedReachSetup r = load_reach_setup(project_, data.dir.value_or(std::filesystem::path()));
+  LoadedReachSetup r = load_reach_setup(project_);
   reach_ = std::move(r.setup);
   assess_problems_ = std::move(r.problems);
 }

@@ -236,7 +236,7 @@ RenderedReport render_report(const Project& project, const ReportSource& source,
   ao.rounding = options.rounding;
   ao.duration_rule = options.duration_rule;
   if (project.has_shelf_geometry()) {
-    LoadedReachSetup reach = load_reach_setup(project, find_data_dir());
+    LoadedReachSetup reach = load_reach_setup(project);
     if (!reach.setup) {
       for (const Problem& p : reach.problems) out.problems.push_back(format_problem(source.name, p));
       return out;

@@ -369,6 +369,31 @@ TEST_CASE("unsaved edits survive a crash: autosave, destroy the window unsaved, 
   CHECK_FALSE(QFile::exists(w.recovery_file()));
 }
 
+TEST_CASE("File > Export report writes the audit report of the saved file; unsaved edits are refused") {
+  QTemporaryDir dir;
+  REQUIRE(dir.isValid());
+  const QString project = dir.filePath("store.rackreach.json");
+  REQUIRE(QFile::copy(demo, project));
+  MainWindow w(false);
+  REQUIRE(w.open_file(project).isEmpty());
+  const QString pdf = dir.filePath("audit.pdf");
+  const QStringList problems = w.export_report_to(pdf);
+  INFO(problems.join("\n").toStdString());
+  REQUIRE(problems.isEmpty());
+  QFile out(pdf);
+  REQUIRE(out.open(QIODevice::ReadOnly));
+  CHECK(out.read(5) == "%PDF-");
+  // Unsaved edits: refused with the reason, nothing written.
+  Part p = w.model().project().store.parts.at(0);
+  p.unit_weight = 9.5;
+  w.model().undo_stack()->push(new ReplacePartCommand(w.model(), 0, p, "edit"));
+  const QString html = dir.filePath("audit.html");
+  const QStringList refused = w.export_report_to(html);
+  REQUIRE(refused.size() == 1);
+  CHECK(refused.front().contains("save it first"));
+  CHECK_FALSE(QFile::exists(html));
+}
+
 TEST_CASE("at 1280x800 the findings show slot, LI, band and remedies without scrolling sideways") {
   MainWindow w(false);
   REQUIRE(w.open_file(demo).isEmpty());

@@ -113,7 +113,7 @@ void check_random_edits(Project project, int edits, std::uint64_t seed) {
   AssessOptions options;
   std::optional<LoadedReachSetup> reach;
   if (project.has_shelf_geometry()) {
-    reach = load_reach_setup(project, find_data_dir());
+    reach = load_reach_setup(project);
     REQUIRE(reach->setup);
     options.reach = reach->setup;
   }
@@ -229,7 +229,7 @@ TEST_CASE("The kept review equals the full review after every random edit of a l
 
 TEST_CASE("An edit the kept review cannot follow gives the full review", "[review][update]") {
   Project p = load_demo();
-  LoadedReachSetup reach = load_reach_setup(p, find_data_dir());
+  LoadedReachSetup reach = load_reach_setup(p);
   AssessOptions options;
   options.reach = reach.setup;
   const ReviewOptions ro = make_review_options(options, p.duration_rule);

@@ -45,7 +45,7 @@ _rackreach() {
     w=${COMP_WORDS[i]}
     if [[ -z $cmd ]]; then
       case $w in
-        assess | check | template | limits | import | export-csv | reslot | population) cmd=$w ;;
+        assess | check | template | limits | import | export-csv | reslot | report | population) cmd=$w ;;
       esac
     elif [[ $cmd == population && -z $sub ]]; then
       case $w in list | show) sub=$w ;; esac
@@ -67,16 +67,17 @@ _rackreach() {
     --out)
       case $cmd in
         assess) _rackreach_files '*'; return ;;
+        report) _rackreach_files '*'; return ;;
         *) _rackreach_files '*.json'; return ;;
       esac ;;
     --mix) COMPREPLY=($(compgen -W "women= men=" -- "$cur")); compopt -o nospace 2>/dev/null; return ;;
-    --fail-above | --max-moves | --cost-per-move | --percentiles) return ;;  # a number: nothing to offer
+    --fail-above | --max-moves | --cost-per-move | --percentiles | --date | --site | --assessor | --revision) return ;;  # a number: nothing to offer
   esac
 
   local opts
   case $cmd in
     "") opts="--help -h --version"
-        [[ $cur != -* ]] && opts="assess check template limits import export-csv reslot population" ;;
+        [[ $cur != -* ]] && opts="assess check template limits import export-csv reslot report population" ;;
     assess) opts="--help -h --format --rounding --duration-rule --fail-above --out" ;;
     check) opts="--help -h" ;;
     template) opts="--help -h --units" ;;
@@ -84,6 +85,7 @@ _rackreach() {
     import) opts="--help -h --parts --slots --out --units --ignore-unknown-columns" ;;
     export-csv) opts="--help -h --parts --slots" ;;
     reslot) opts="--help -h --out --max-moves --cost-per-move --group-families --format --costs-out" ;;
+    report) opts="--help -h --out --date --site --assessor --revision --rounding --duration-rule" ;;
     population)
       case $sub in
         "") opts="--help -h"; [[ $cur != -* ]] && opts="list show" ;;
