@@ -451,7 +451,9 @@ class Builder {
                                  "; F in lifts per minute. The remedies say what the slot needs and why, with the "
                                  "number that decides it."});
     Table t;
-    t.header = {"#", "Slot", "Part (family)", "Place", "Load", "V", "H", "F", "RWL", "LI", "Band", "Reach", "Remedies"};
+    // Units in the headers too: they repeat on every page of the table.
+    t.header = {"#",      "Slot",       "Part (family)", "Place",           "Load " + mass_, "V " + len_, "H " + len_,
+                "F /min", "RWL " + mass_, "LI",          "Band",            "Reach",         "Remedies"};
     t.widths_pct = {3, 8, 9, 7, 4, 4, 4, 4, 5, 4, 7, 14, 27};
     for (std::size_t i = 0; i < rv.findings.size(); ++i) {
       const SlotFinding& f = rv.findings[i];
@@ -528,7 +530,8 @@ class Builder {
       s.blocks.push_back(Subheading{"Job " + ja.id + (job.name ? " (" + *job.name + ")" : "")});
       s.blocks.push_back(Paragraph{"Duration: " + dur});
       Table t;
-      t.header = {"Task", "End", "Load", "H", "V", "D", "A", "F", "HM", "VM", "DM", "AM", "FM", "CM", "RWL", "LI", "Band"};
+      t.header = {"Task", "End", "Load " + mass_, "H " + len_, "V " + len_, "D " + len_, "A deg", "F /min", "HM", "VM",
+                  "DM",   "AM",  "FM",            "CM",        "RWL " + mass_, "LI", "Band"};
       for (std::size_t ti = 0; ti < ja.tasks.size(); ++ti) {
         const TaskResult& r = ja.tasks[ti];
         const LiftTask& lt = job.tasks[ti];
