@@ -2,7 +2,8 @@
 # Installs the Debian 12 packages Rackreach builds and tests with, only those that are missing.
 set -euo pipefail
 packages=(build-essential cmake pkg-config qt6-base-dev libeigen3-dev nlohmann-json3-dev catch2 libcli11-dev
-          liblemon-dev libcsv-dev libbenchmark-dev poppler-utils time)
+          liblemon-dev libcsv-dev libbenchmark-dev poppler-utils time
+          clang libclang-rt-14-dev)  # clang 14 with its sanitizer and libFuzzer runtimes: the sanitizer config
 missing=()
 for p in "${packages[@]}"; do
   dpkg-query -W -f='${Status}' "$p" 2>/dev/null | grep -q "install ok installed" || missing+=("$p")
