@@ -67,11 +67,14 @@ fuzz_smoke() {
     esac
     mkdir -p "$work/$target"
     # New inputs go to the scratch folder first on the line, never into the repository's corpus.
+    local status=0
     "$bin" -max_total_time=5 -timeout=10 -max_len=32768 -print_final_stats=1 -dict="$dict" \
-      -artifact_prefix="$work/" "$work/$target" "fuzz/corpus/$target" "${extra[@]}" 2>&1 |
-      grep -E "stat::number_of_executed_units|ERROR|SUMMARY|Test unit written" || true
-    if ls "$work"/crash-* "$work"/leak-* "$work"/timeout-* "$work"/oom-* >/dev/null 2>&1; then
-      echo "test.sh: fuzz_${target} found a failing input; it is in $work" >&2
+      -artifact_prefix="$work/" "$work/$target" "fuzz/corpus/$target" "${extra[@]}" >"$work/$target.log" 2>&1 ||
+      status=$?
+    grep -E "stat::number_of_executed_units|ERROR|SUMMARY|Test unit written" "$work/$target.log" |
+      sed "s/^/fuzz_${target}: /" || true
+    if [ "$status" -ne 0 ] || compgen -G "$work/*-*[0-9a-f]" >/dev/null; then
+      echo "test.sh: fuzz_${target} failed (exit $status); the log and the failing input are in $work" >&2
       return 1
     fi
   done
