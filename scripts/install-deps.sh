@@ -3,7 +3,8 @@
 set -euo pipefail
 packages=(build-essential cmake pkg-config qt6-base-dev libeigen3-dev nlohmann-json3-dev catch2 libcli11-dev
           liblemon-dev libcsv-dev libbenchmark-dev poppler-utils time
-          python3 python3-jsonschema desktop-file-utils dpkg-dev)
+          python3 python3-jsonschema desktop-file-utils dpkg-dev
+          clang libclang-rt-14-dev)  # clang 14 with its sanitizer and libFuzzer runtimes: the sanitizer config
 missing=()
 for p in "${packages[@]}"; do
   dpkg-query -W -f='${Status}' "$p" 2>/dev/null | grep -q "install ok installed" || missing+=("$p")

@@ -18,6 +18,7 @@
 
 #include <CLI/CLI.hpp>
 
+#include "engine/io/atomic_file.hpp"
 #include "anthropometry/population_json.hpp"
 #include "raw_survey.hpp"
 #include "sha256.hpp"
@@ -146,11 +147,7 @@ int run(const std::string& survey_name, const std::string& raw_dir, const std::s
   }
 
   const std::string text = save_population_text(t);
-  {
-    std::ofstream out(out_path, std::ios::binary);
-    out << text;
-    if (!out) throw std::runtime_error(out_path + ": cannot be written");
-  }
+  if (auto err = write_file_atomically(out_path, text)) throw std::runtime_error(*err);
   const LoadedPopulation back = load_population_file(out_path);
   for (const Problem& p : back.problems) std::cerr << format_problem(p) << "\n";
   if (!back.table) return 1;

@@ -15,6 +15,7 @@
 #include <sstream>
 
 #include "engine/io/assessment_output.hpp"
+#include "engine/io/input_limits.hpp"
 
 namespace rackreach {
 namespace {
@@ -64,13 +65,31 @@ struct ParseState {
   std::size_t cell_start = 0;  ///< first byte of the cell being read
   CsvRecord current;
   std::vector<CsvRecord> records;
+  std::optional<Problem> limit;  ///< the first size limit passed (input_limits.hpp); reading stops there
+  const std::string* file = nullptr;
 };
 
 void on_cell(void* data, std::size_t size, void* state_ptr) {
   auto& st = *static_cast<ParseState*>(state_ptr);
+  if (st.limit) return;
+  const std::size_t line = st.lines->line_of(st.cell_start);
+  const std::size_t column = st.current.cells.size() + 1;
+  if (size > input_limits::max_csv_field_bytes) {
+    st.limit = Problem("too_long", "line " + std::to_string(line) + ", column " + std::to_string(column),
+                       std::to_string(size) + " bytes",
+                       "a cell may hold at most " + std::to_string(input_limits::max_csv_field_bytes) + " bytes", "",
+                       *st.file);
+    return;
+  }
+  if (column > input_limits::max_csv_columns) {
+    st.limit = Problem("too_many", "line " + std::to_string(line) + ", column " + std::to_string(column), "",
+                       "a row may hold at most " + std::to_string(input_limits::max_csv_columns) + " cells", "",
+                       *st.file);
+    return;
+  }
   CsvCell cell;
   if (data) cell.text.assign(static_cast<const char*>(data), size);  // CSV_EMPTY_IS_NULL: null is an empty cell
-  cell.line = st.lines->line_of(st.cell_start);
+  cell.line = line;
   if (st.current.cells.empty()) st.current.line = cell.line;
   st.current.cells.push_back(std::move(cell));
   st.cell_start = st.offset + 1;
@@ -78,6 +97,13 @@ void on_cell(void* data, std::size_t size, void* state_ptr) {
 
 void on_row_end(int /*terminator*/, void* state_ptr) {
   auto& st = *static_cast<ParseState*>(state_ptr);
+  if (st.limit) return;
+  if (!st.current.cells.empty() && st.records.size() > input_limits::max_csv_rows) {  // the header is not counted
+    st.limit = Problem("too_many", "line " + std::to_string(st.current.line), "",
+                       "a file may hold at most " + std::to_string(input_limits::max_csv_rows) + " rows of data", "",
+                       *st.file);
+    return;
+  }
   if (!st.current.cells.empty()) st.records.push_back(std::move(st.current));
   st.current = CsvRecord{};
   st.cell_start = st.offset + 1;
@@ -103,6 +129,7 @@ CsvText read_csv(std::string_view text, const std::string& file) {
   const LineIndex lines(text);
   ParseState st;
   st.lines = &lines;
+  st.file = &file;
   CsvText out;
 
   csv_parser parser;
@@ -123,18 +150,28 @@ CsvText read_csv(std::string_view text, const std::string& file) {
                           line_excerpt(text, i), rule, "", file);
       break;
     }
+    if (st.limit) break;
+  }
+  if (st.limit) {  // a file beyond a size limit is refused as a whole: none of its rows is read
+    csv_free(&parser);
+    out.error = std::move(st.limit);
+    return out;
   }
   if (!out.error) {
     st.offset = text.size();
     const std::size_t open_cell_start = st.cell_start;
     const std::size_t open_column = st.current.cells.size() + 1;
-    if (csv_fini(&parser, on_cell, on_row_end, &st) != 0) {
+    if (csv_fini(&parser, on_cell, on_row_end, &st) != 0 && !st.limit) {
       out.error = Problem("parse_error", cell_path(lines.line_of(open_cell_start), open_column),
                           line_excerpt(text, std::min(open_cell_start, text.size())),
                           "is not valid CSV: a quoted cell starts here and its closing quote is missing", "", file);
     }
   }
   csv_free(&parser);
+  if (st.limit) {
+    if (!out.error) out.error = std::move(st.limit);
+    return out;
+  }
   out.records = std::move(st.records);
   return out;
 }
@@ -756,21 +793,10 @@ constexpr std::size_t origin_angle = find_column(slot_csv_columns, "origin_angle
 constexpr std::size_t standing_distance = find_column(slot_csv_columns, "standing_distance");
 }  // namespace sc
 
-constexpr Range box_side{0.0, 500.0, true};  // cm
+constexpr Range box_side{0.0, input_limits::max_box_side_cm, true};  // cm
 
 std::optional<std::string> read_file(const std::string& file, std::vector<Problem>& problems) {
-  std::ifstream in(file, std::ios::binary);
-  if (!in) {
-    problems.emplace_back("file_error", "", "", "cannot open the file for reading", "", file);
-    return std::nullopt;
-  }
-  std::ostringstream ss;
-  ss << in.rdbuf();
-  if (in.bad()) {
-    problems.emplace_back("file_error", "", "", "cannot read the file", "", file);
-    return std::nullopt;
-  }
-  return ss.str();
+  return input_limits::read_input_file(file, input_limits::max_csv_file_bytes, problems, file);
 }
 
 std::string duplicate_rule(std::string_view what, const std::string& id, std::size_t first_line) {
@@ -802,7 +828,7 @@ PartsCsv load_parts_csv_text(std::string_view text, const std::string& file_name
     }
     p.family = t.text(pc::family).value_or("");
     p.description = t.text(pc::description).value_or("");
-    if (auto w = t.number(pc::unit_weight, Range{0.0, 2000.0, true})) p.unit_weight = *w;
+    if (auto w = t.number(pc::unit_weight, Range{0.0, input_limits::max_mass_kg, true})) p.unit_weight = *w;
     const auto w = t.number(pc::width, box_side);
     const auto d = t.number(pc::depth, box_side);
     const auto h = t.number(pc::height, box_side);
@@ -833,9 +859,9 @@ PartsCsv load_parts_csv_text(std::string_view text, const std::string& file_name
                 "needs handhold.kind (handles, cutouts or none) on the same row");
       }
     }
-    if (auto n = t.number(pc::per_kit, Range{0.0, 1000.0, true})) p.pieces_per_kit = *n;
-    if (auto n = t.number(pc::per_grasp, Range{0.0, 1000.0, true})) p.pieces_per_grasp = *n;
-    if (auto n = t.whole(pc::pack_pieces, 1, 100000)) p.pack_pieces = static_cast<int>(*n);
+    if (auto n = t.number(pc::per_kit, Range{0.0, input_limits::max_pieces, true})) p.pieces_per_kit = *n;
+    if (auto n = t.number(pc::per_grasp, Range{0.0, input_limits::max_pieces, true})) p.pieces_per_grasp = *n;
+    if (auto n = t.whole(pc::pack_pieces, 1, input_limits::max_pack_pieces)) p.pack_pieces = static_cast<int>(*n);
     if (auto b = t.boolean(pc::truck_only)) p.truck_only = *b;
     if (auto g = t.number(pc::grip_height, Range{0.0, std::nullopt, false})) {
       if (h && *g > *h)
@@ -883,7 +909,7 @@ SlotsCsv load_slots_csv_text(std::string_view text, const std::string& file_name
     if (auto p = t.choice(sc::position, {"front", "back"})) s.position = static_cast<SlotPosition>(*p);
     if (auto f = t.boolean(sc::fixed)) s.fixed = *f;
     s.origin_angle_deg = t.number(sc::origin_angle, Range{0.0, 180.0, false});
-    s.standing_distance = t.number(sc::standing_distance, Range{0.0, 100.0, false});
+    s.standing_distance = t.number(sc::standing_distance, Range{0.0, input_limits::max_standing_distance_cm, false});
     if (t.row_ok()) {
       out.part_cell_paths.push_back(t.path(sc::part));
       out.slots.push_back(std::move(s));

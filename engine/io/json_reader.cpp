@@ -5,19 +5,22 @@
 #include <cmath>
 #include <cstdio>
 
+#include "engine/io/input_limits.hpp"
+
 namespace rackreach {
 namespace {
 
-const char* type_word(const nlohmann::json& j) {
+template <class Json>
+const char* type_word(const Json& j) {
   switch (j.type()) {
-    case nlohmann::json::value_t::null: return "null";
-    case nlohmann::json::value_t::object: return "an object";
-    case nlohmann::json::value_t::array: return "an array";
-    case nlohmann::json::value_t::string: return "a string";
-    case nlohmann::json::value_t::boolean: return "a boolean";
-    case nlohmann::json::value_t::number_integer:
-    case nlohmann::json::value_t::number_unsigned:
-    case nlohmann::json::value_t::number_float: return "a number";
+    case nlohmann::detail::value_t::null: return "null";
+    case nlohmann::detail::value_t::object: return "an object";
+    case nlohmann::detail::value_t::array: return "an array";
+    case nlohmann::detail::value_t::string: return "a string";
+    case nlohmann::detail::value_t::boolean: return "a boolean";
+    case nlohmann::detail::value_t::number_integer:
+    case nlohmann::detail::value_t::number_unsigned:
+    case nlohmann::detail::value_t::number_float: return "a number";
     default: return "an unsupported value";
   }
 }
@@ -40,7 +43,7 @@ std::string describe(const NumberRule& r) {
     s += std::string(r.max_exclusive ? " below " : " of at most ") + fmt_num(*r.max) + unit;
   else if (!unit.empty())
     s += ", in" + unit;
-  return s;
+  return s + std::string(r.note);
 }
 
 }  // namespace
@@ -57,18 +60,27 @@ std::size_t calc_edit_distance(std::string_view a, std::string_view b) {
   return prev[b.size()];
 }
 
-std::string json_excerpt(const nlohmann::json& j) {
-  std::string s = j.dump();
+namespace {
+template <class Json>
+std::string excerpt(const Json& j) {
+  // Invalid UTF-8 in a string is shown as U+FFFD rather than thrown.
+  std::string s = j.dump(-1, ' ', false, Json::error_handler_t::replace);
   if (s.size() > 60) s = s.substr(0, 57) + "...";
   return s;
 }
+}  // namespace
 
-void JsonReader::add(std::string code, const JsonPath& path, const nlohmann::json* value, std::string rule) {
+std::string json_excerpt(const nlohmann::json& j) { return excerpt(j); }
+std::string json_excerpt(const nlohmann::ordered_json& j) { return excerpt(j); }
+
+template <class Json>
+void BasicJsonReader<Json>::add(std::string code, const JsonPath& path, const Json* value, std::string rule) {
   problems_.push_back({std::move(code), path.str(), value ? json_excerpt(*value) : std::string(), std::move(rule),
-                       context_});
+                       context_, file_});
 }
 
-bool JsonReader::object(const nlohmann::json& j, const JsonPath& path, std::initializer_list<std::string_view> allowed) {
+template <class Json>
+bool BasicJsonReader<Json>::object(const Json& j, const JsonPath& path, std::initializer_list<std::string_view> allowed) {
   if (!j.is_object()) {
     add("wrong_type", path, &j, std::string("must be an object; found ") + type_word(j));
     return false;
@@ -84,16 +96,17 @@ bool JsonReader::object(const nlohmann::json& j, const JsonPath& path, std::init
         if (suggestion.empty() && (calc_edit_distance(a, it.key()) <= 2 || (prefix && it.key().size() > 3)))
           suggestion = std::string(a);
       }
-      std::string rule = "unknown key";
+      std::string rule = "is not a known field here";
       if (!suggestion.empty()) rule += " (did you mean \"" + suggestion + "\"?)";
-      problems_.push_back({"unknown_key", JsonPath(path, it.key()).str(), "", rule + "; allowed here: " + list,
-                           context_});
+      problems_.push_back({"unknown_key", JsonPath(path, it.key()).str(), json_excerpt(it.value()),
+                           rule + "; allowed here: " + list, context_, file_});
     }
   }
   return true;
 }
 
-bool JsonReader::array(const nlohmann::json& j, const JsonPath& path, std::size_t min_size, std::string_view what) {
+template <class Json>
+bool BasicJsonReader<Json>::array(const Json& j, const JsonPath& path, std::size_t min_size, std::string_view what) {
   if (!j.is_array()) {
     add("wrong_type", path, &j, std::string("must be an array of ") + std::string(what) + "; found " + type_word(j));
     return false;
@@ -105,7 +118,28 @@ bool JsonReader::array(const nlohmann::json& j, const JsonPath& path, std::size_
   return true;
 }
 
-const nlohmann::json* JsonReader::member(const nlohmann::json& obj, const JsonPath& path, std::string_view key,
+template <class Json>
+bool BasicJsonReader<Json>::at_most(const Json& j, const JsonPath& path, std::size_t max, std::string_view what) {
+  if (j.size() <= max) return true;
+  problems_.push_back({"too_many", path.str(), std::to_string(j.size()) + " " + std::string(what),
+                       "may hold at most " + std::to_string(max) + " " + std::string(what), context_, file_});
+  return false;
+}
+
+template <class Json>
+bool BasicJsonReader<Json>::streamed_within(const JsonPath& array_path, std::size_t index, std::size_t max,
+                                 std::string_view what) {
+  if (index < max) return true;
+  if (index == max)
+    problems_.push_back({"too_many", JsonPath(array_path, index).str(), "",
+                         "may hold at most " + std::to_string(max) + " " + std::string(what) +
+                             "; the rest of the array is not read",
+                         "", file_});
+  return false;
+}
+
+template <class Json>
+const Json* BasicJsonReader<Json>::member(const Json& obj, const JsonPath& path, std::string_view key,
                                          bool required) {
   auto it = obj.find(key);
   if (it == obj.end()) {
@@ -115,54 +149,100 @@ const nlohmann::json* JsonReader::member(const nlohmann::json& obj, const JsonPa
   return &*it;
 }
 
-std::optional<double> JsonReader::number(const nlohmann::json& obj, const JsonPath& path, std::string_view key,
-                                         bool required, const NumberRule& rule) {
-  const nlohmann::json* j = member(obj, path, key, required);
+template <class Json>
+std::optional<double> BasicJsonReader<Json>::number(const Json& obj, const JsonPath& path, std::string_view key,
+                                                    bool required, const NumberRule& rule) {
+  const Json* j = member(obj, path, key, required);
   if (!j) return std::nullopt;
+  // A plausibility limit (a rule with a note) is named only to a value above it: a wrong type or a value below the
+  // minimum is told the method's own rule.
+  NumberRule lower = rule;
+  if (!rule.note.empty()) {
+    lower.max.reset();
+    lower.note = {};
+  }
   if (!j->is_number()) {
-    add("wrong_type", JsonPath(path, key), j, describe(rule) + "; found " + type_word(*j));
+    add("wrong_type", JsonPath(path, key), j, describe(lower) + "; found " + type_word(*j));
     return std::nullopt;
   }
-  const double x = j->get<double>();
+  const double x = j->template get<double>();
   const bool below = rule.min && (rule.min_exclusive ? x <= *rule.min : x < *rule.min);
   const bool above = rule.max && (rule.max_exclusive ? x >= *rule.max : x > *rule.max);
-  if (!std::isfinite(x) || below || above) {
+  if (!std::isfinite(x) || below) {
+    add("out_of_range", JsonPath(path, key), j, describe(lower));
+    return std::nullopt;
+  }
+  if (above) {
     add("out_of_range", JsonPath(path, key), j, describe(rule));
     return std::nullopt;
   }
   return x;
 }
 
-std::optional<std::string> JsonReader::string(const nlohmann::json& obj, const JsonPath& path, std::string_view key,
-                                              bool required, bool non_empty) {
-  const nlohmann::json* j = member(obj, path, key, required);
+template <class Json>
+std::optional<std::string> BasicJsonReader<Json>::string(const Json& obj, const JsonPath& path, std::string_view key,
+                                                         bool required, bool non_empty) {
+  const Json* j = member(obj, path, key, required);
   if (!j) return std::nullopt;
-  if (!j->is_string()) {
-    add("wrong_type", JsonPath(path, key), j, std::string("must be a string; found ") + type_word(*j));
+  return string_value(*j, JsonPath(path, key), non_empty);
+}
+
+template <class Json>
+std::optional<std::string> BasicJsonReader<Json>::string_value(const Json& j, const JsonPath& path, bool non_empty) {
+  if (!j.is_string()) {
+    add("wrong_type", path, &j, std::string("must be a string; found ") + type_word(j));
     return std::nullopt;
   }
-  std::string s = j->get<std::string>();
+  const std::string& s = j.template get_ref<const std::string&>();
+  if (s.size() > input_limits::max_string_bytes) {
+    add("too_long", path, &j, "must be at most " + std::to_string(input_limits::max_string_bytes) + " bytes long");
+    return std::nullopt;
+  }
   if (non_empty && s.empty()) {
-    add("empty", JsonPath(path, key), j, "must not be empty");
+    add("empty", path, &j, "must not be empty");
     return std::nullopt;
   }
   return s;
 }
 
-std::optional<bool> JsonReader::boolean(const nlohmann::json& obj, const JsonPath& path, std::string_view key,
+template <class Json>
+std::optional<long long> BasicJsonReader<Json>::whole_number(const Json& obj, const JsonPath& path,
+                                                             std::string_view key, bool required, long long min,
+                                                             long long max, std::string_view note) {
+  const Json* j = member(obj, path, key, required);
+  if (!j) return std::nullopt;
+  const std::string rule =
+      "must be a whole number from " + std::to_string(min) + " to " + std::to_string(max) + std::string(note);
+  if (!j->is_number()) {
+    add("wrong_type", JsonPath(path, key), j, rule + "; found " + type_word(*j));
+    return std::nullopt;
+  }
+  // number_unsigned above the range of long long, and fractions, are out of range, never wrapped or truncated.
+  const bool whole = j->is_number_integer() && !(j->is_number_unsigned() && j->template get<unsigned long long>() >
+                                                                                static_cast<unsigned long long>(max));
+  if (!whole || j->template get<long long>() < min || j->template get<long long>() > max) {
+    add("out_of_range", JsonPath(path, key), j, rule);
+    return std::nullopt;
+  }
+  return j->template get<long long>();
+}
+
+template <class Json>
+std::optional<bool> BasicJsonReader<Json>::boolean(const Json& obj, const JsonPath& path, std::string_view key,
                                         bool required) {
-  const nlohmann::json* j = member(obj, path, key, required);
+  const Json* j = member(obj, path, key, required);
   if (!j) return std::nullopt;
   if (!j->is_boolean()) {
     add("wrong_type", JsonPath(path, key), j, std::string("must be true or false; found ") + type_word(*j));
     return std::nullopt;
   }
-  return j->get<bool>();
+  return j->template get<bool>();
 }
 
-std::optional<std::string> JsonReader::choice(const nlohmann::json& obj, const JsonPath& path, std::string_view key,
+template <class Json>
+std::optional<std::string> BasicJsonReader<Json>::choice(const Json& obj, const JsonPath& path, std::string_view key,
                                               bool required, std::initializer_list<std::string_view> choices) {
-  const nlohmann::json* j = member(obj, path, key, required);
+  const Json* j = member(obj, path, key, required);
   if (!j) return std::nullopt;
   std::string list;
   for (std::string_view c : choices) list += (list.empty() ? "\"" : ", \"") + std::string(c) + "\"";
@@ -170,11 +250,14 @@ std::optional<std::string> JsonReader::choice(const nlohmann::json& obj, const J
     add("wrong_type", JsonPath(path, key), j, "must be one of " + list + "; found " + type_word(*j));
     return std::nullopt;
   }
-  const std::string s = j->get<std::string>();
+  const std::string& s = j->template get_ref<const std::string&>();
   for (std::string_view c : choices)
     if (c == s) return s;
   add("invalid_value", JsonPath(path, key), j, "must be one of " + list);
   return std::nullopt;
 }
+
+template class BasicJsonReader<nlohmann::json>;
+template class BasicJsonReader<nlohmann::ordered_json>;
 
 }  // namespace rackreach

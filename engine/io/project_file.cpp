@@ -7,6 +7,7 @@
 #include <tuple>
 #include <sstream>
 
+#include "engine/io/input_limits.hpp"
 #include "engine/io/json_reader.hpp"
 #include "engine/io/shared_readers.hpp"
 #include "engine/io/store_loader.hpp"
@@ -15,6 +16,7 @@ namespace rackreach {
 namespace {
 
 using nlohmann::json;
+namespace lim = input_limits;
 
 /// Finds the JSON path at which a parse failed, by parsing again with a callback that follows the path.
 /// Only run after a failure, so a good file is parsed once, at full speed.
@@ -60,18 +62,7 @@ std::string find_parse_error_path(std::string_view text) {
   return path;
 }
 
-std::string line_and_column(std::string_view text, std::size_t byte) {
-  std::size_t line = 1, col = 1;
-  for (std::size_t i = 0; i < byte && i < text.size(); ++i) {
-    if (text[i] == '\n') {
-      ++line;
-      col = 1;
-    } else {
-      ++col;
-    }
-  }
-  return "line " + std::to_string(line) + ", column " + std::to_string(col);
-}
+using input_limits::line_and_column;
 
 class ProjectLoader {
  public:
@@ -95,6 +86,7 @@ class ProjectLoader {
     const JsonPath jobs_path(root, "jobs");
     const JsonPath job_path(jobs_path, index);
     ++jobs_seen_;
+    if (!r_.streamed_within(jobs_path, index, lim::max_jobs, "jobs")) return;
     if (auto job = load_job(j, job_path)) {
       if (!job_ids_.insert(job->id).second)
         problems_.push_back({"duplicate_id", JsonPath(job_path, "id").str(), "\"" + job->id + "\"",
@@ -191,7 +183,7 @@ class ProjectLoader {
     }
     if (const json* tasks = r_.member(j, path, "tasks", true)) {
       const JsonPath tasks_path(path, "tasks");
-      if (r_.array(*tasks, tasks_path, 1, "tasks")) {
+      if (r_.array(*tasks, tasks_path, 1, "tasks") && r_.at_most(*tasks, tasks_path, lim::max_tasks_per_job, "tasks")) {
         std::set<std::string> ids;
         job.tasks.reserve(tasks->size());
         job.details.reserve(tasks->size());
@@ -218,8 +210,9 @@ class ProjectLoader {
     const JsonPath path(task_path, key);
     if (!r_.object(*j, path, {"h", "v", "a"})) return std::nullopt;
     const std::string_view len = length_unit(units_);
-    auto h = r_.number(*j, path, "h", true, {0.0, std::nullopt, true, false, len});
-    auto v = r_.number(*j, path, "v", true, {0.0, std::nullopt, false, false, len});
+    auto h = r_.number(*j, path, "h", true, {0.0, plausible_length(lim::max_h_cm), true, false, len, lim::plausibility_note});
+    auto v = r_.number(*j, path, "v", true,
+                       {0.0, plausible_length(lim::max_height_cm), false, false, len, lim::plausibility_note});
     auto a = r_.number(*j, path, "a", false, {0.0, 180.0, false, false, "deg (an angle magnitude)"});
     if (!h || !v || (j->contains("a") && !a)) return std::nullopt;
     return LiftPoint{*h, *v, a.value_or(0.0)};
@@ -236,8 +229,9 @@ class ProjectLoader {
     t.id = r_.string(j, path, "id", true).value_or("");
     if (!t.id.empty()) r_.set_context(job_context + (job_context.empty() ? "" : ", ") + "task \"" + t.id + "\"");
     const std::string_view mass = mass_unit(units_);
-    t.load = r_.number(j, path, "load", true, {0.0, std::nullopt, true, false, mass}).value_or(0.0);
-    t.max_load = r_.number(j, path, "max_load", false, {0.0, std::nullopt, true, false, mass});
+    const NumberRule load_rule{0.0, plausible_mass(), true, false, mass, lim::plausibility_note};
+    t.load = r_.number(j, path, "load", true, load_rule).value_or(0.0);
+    t.max_load = r_.number(j, path, "max_load", false, load_rule);
     if (t.max_load && t.load > 0.0 && *t.max_load < t.load)
       r_.add("out_of_range", JsonPath(path, "max_load"), r_.member(j, path, "max_load", false),
              "must be at least the load (" + json(t.load).dump() + " " + std::string(mass) + ")");
@@ -251,8 +245,7 @@ class ProjectLoader {
       sample = load_frequency_sample(*freq_sample, JsonPath(path, "frequency_sample"));
       if (sample) t.frequency_per_min = calc_sampled_frequency(sample->lifts_per_min, sample->lifting_min, sample->sample_min);
     } else {
-      t.frequency_per_min =
-          r_.number(j, path, "frequency", true, {0.0, std::nullopt, true, false, "lifts/min"}).value_or(0.0);
+      t.frequency_per_min = r_.number(j, path, "frequency", true, frequency_rule()).value_or(0.0);
     }
     if (auto c = r_.choice(j, path, "coupling", true, {"good", "fair", "poor"})) t.coupling = *find_coupling(*c);
     if (auto o = load_point(j, path, "origin")) t.origin = *o;
@@ -271,10 +264,14 @@ class ProjectLoader {
     if (!r_.object(j, path, {"grip_depth", "beam_underside", "overhead_structure"})) return std::nullopt;
     const std::string_view len = length_unit(units_);
     ShelfGeometry g;
-    auto depth = r_.number(j, path, "grip_depth", true, {0.0, std::nullopt, false, false, len});
+    auto depth = r_.number(j, path, "grip_depth", true,
+                           {0.0, plausible_length(lim::max_shelf_depth_cm), false, false, len, lim::plausibility_note});
     // The beam above the grip must be above the grip itself (the origin's V).
-    g.beam_underside = r_.number(j, path, "beam_underside", false, {grip_height, std::nullopt, true, false, len});
-    g.overhead_structure = r_.number(j, path, "overhead_structure", false, {0.0, std::nullopt, true, false, len});
+    const double top = plausible_length(lim::max_height_cm);
+    g.beam_underside =
+        r_.number(j, path, "beam_underside", false, {grip_height, top, true, false, len, lim::plausibility_note});
+    g.overhead_structure =
+        r_.number(j, path, "overhead_structure", false, {0.0, top, true, false, len, lim::plausibility_note});
     if (!depth || (j.contains("beam_underside") && !g.beam_underside) ||
         (j.contains("overhead_structure") && !g.overhead_structure))
       return std::nullopt;
@@ -319,9 +316,15 @@ class ProjectLoader {
     }
   }
 
+  double plausible_length(double max_cm) const { return Length{max_cm, UnitSystem::metric}.in_units(units_); }
+  double plausible_mass() const { return Mass{lim::max_mass_kg, UnitSystem::metric}.in_units(units_); }
+  static NumberRule frequency_rule() {
+    return {0.0, lim::max_frequency_per_min, true, false, "lifts/min", lim::plausibility_note};
+  }
+
   std::optional<FrequencySample> load_frequency_sample(const json& j, const JsonPath& path) {
     if (!r_.object(j, path, {"lifts_per_min", "lifting_min", "sample_min"})) return std::nullopt;
-    auto rate = r_.number(j, path, "lifts_per_min", true, {0.0, std::nullopt, true, false, "lifts/min"});
+    auto rate = r_.number(j, path, "lifts_per_min", true, frequency_rule());
     auto lifting = r_.number(j, path, "lifting_min", true, {0.0, std::nullopt, true, false, "min"});
     auto sample = r_.number(j, path, "sample_min", false, {0.0, std::nullopt, true, false, "min"});
     const double sample_min = sample.value_or(frequency_sample_min);
@@ -347,6 +350,10 @@ class ProjectLoader {
 
 LoadResult load_project_text(std::string_view text) {
   LoadResult out;
+  if (const auto at = lim::find_json_depth_excess(text, lim::max_json_depth)) {
+    out.problems.push_back(lim::too_deep_problem(text, *at));
+    return out;
+  }
   ProjectLoader loader(out.problems);
   // The parser hands each element of the root's arrays (jobs, zones, racks, parts, slots, routes) to the loader as
   // soon as it is complete and then drops it, so the document tree never holds more than one element of them: a
@@ -388,7 +395,8 @@ LoadResult load_project_text(std::string_view text) {
   json doc;
   try {
     doc = json::parse(text.begin(), text.end(), on_event);
-  } catch (const json::parse_error& e) {
+  } catch (const json::exception& e) {
+    // A syntax error (parse_error) or a number too large for a double (out_of_range 406: never infinity).
     // nlohmann's message starts "[json.exception.parse_error.101] parse error at line 3, column 7: ..."
     std::string what = e.what();
     const auto colon = what.find("] ");
@@ -396,10 +404,10 @@ LoadResult load_project_text(std::string_view text) {
     const auto detail = what.find(": ");  // drop nlohmann's own "parse error at line L, column C" prefix
     if (what.rfind("parse error", 0) == 0 && detail != std::string::npos) what = what.substr(detail + 2);
     out.problems.clear();  // what the loader saw of a broken file is not worth reporting
-    out.problems.push_back({"parse_error", find_parse_error_path(text), "",
-                            "the file is not valid JSON (" + line_and_column(text, e.byte ? e.byte - 1 : 0) + "): " +
-                                what,
-                            ""});
+    const auto* pe = dynamic_cast<const json::parse_error*>(&e);
+    const std::string where = pe ? " (" + line_and_column(text, pe->byte ? pe->byte - 1 : 0) + ")" : "";
+    out.problems.push_back(
+        {"parse_error", find_parse_error_path(text), "", "the file is not valid JSON" + where + ": " + what, ""});
     return out;
   }
   if (!units && doc.is_object())
@@ -410,12 +418,10 @@ LoadResult load_project_text(std::string_view text) {
 }
 
 LoadResult load_project_file(const std::string& path) {
-  std::ifstream in(path, std::ios::binary);
-  if (!in) return {std::nullopt, {{"file_error", "", "", "cannot open the file for reading", ""}}};
-  std::ostringstream ss;
-  ss << in.rdbuf();
-  if (in.bad()) return {std::nullopt, {{"file_error", "", "", "cannot read the file", ""}}};
-  return load_project_text(ss.str());
+  LoadResult out;
+  const auto text = lim::read_input_file(path, lim::max_project_file_bytes, out.problems);
+  if (!text) return out;
+  return load_project_text(*text);
 }
 
 std::string make_template(UnitSystem units) {

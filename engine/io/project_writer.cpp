@@ -209,10 +209,14 @@ std::string save_project_text(const Project& p) {
     root["reach_parameters"] = rp;
   }
   store_json(root, p.store, p.units);
-  if (!p.jobs.empty() || p.store.slots.empty()) {
+  if (!p.jobs.empty()) {
     ojson jobs = ojson::array();
     for (const LiftJob& j : p.jobs) jobs.push_back(job_json(j));
     root["jobs"] = std::move(jobs);
+  } else if (p.store.slots.empty()) {
+    // Neither jobs nor slots: the file was a store whose slots are still to come (e.g. the base of an import),
+    // which the loader accepts only with its empty "slots"; an empty "jobs" would not load again.
+    root["slots"] = ojson::array();
   }
   return root.dump(2) + "\n";
 }

@@ -1,10 +1,13 @@
 // SPDX-License-Identifier: MIT
 #include "engine/io/shared_readers.hpp"
 
+#include "engine/io/input_limits.hpp"
+
 namespace rackreach {
 
 std::optional<std::vector<WorkPeriod>> read_work_pattern(JsonReader& r, const nlohmann::json& j, const JsonPath& path) {
-  if (!r.array(j, path, 1, "periods")) return std::nullopt;
+  if (!r.array(j, path, 1, "periods") || !r.at_most(j, path, input_limits::max_work_periods, "periods"))
+    return std::nullopt;
   std::vector<WorkPeriod> out;
   const NumberRule minutes{0.0, 24.0 * 60.0, true, false, "min"};
   for (std::size_t i = 0; i < j.size(); ++i) {

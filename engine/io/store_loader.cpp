@@ -1,6 +1,7 @@
 // SPDX-License-Identifier: MIT
 #include "engine/io/store_loader.hpp"
 
+#include "engine/io/input_limits.hpp"
 #include "engine/io/shared_readers.hpp"
 
 #include <map>
@@ -12,6 +13,7 @@ namespace rackreach {
 namespace {
 
 using nlohmann::json;
+namespace lim = input_limits;
 
 /// "06:30" -> 390 minutes after midnight.
 std::optional<int> parse_clock(const std::string& s) {
@@ -41,6 +43,12 @@ class StoreReader::Impl {
     const JsonPath array_path(root, key);
     const JsonPath p(array_path, index);
     r_.set_context("");
+    const std::size_t max = key == "zones"   ? lim::max_zones
+                            : key == "racks" ? lim::max_racks
+                            : key == "parts" ? lim::max_parts
+                            : key == "slots" ? lim::max_slots
+                                             : lim::max_routes;
+    if (!r_.streamed_within(array_path, index, max, key)) return;
     if (key == "zones") load_zone(j, p, s);
     else if (key == "racks") load_rack(j, p, s);
     else if (key == "parts") load_part(j, p, s);
@@ -55,7 +63,8 @@ class StoreReader::Impl {
     if (const json* j = r_.member(doc, root, "demand", false)) {
       const JsonPath p(root, "demand");
       if (r_.object(*j, p, {"kits_per_hour"}))
-        s.kits_per_hour = r_.number(*j, p, "kits_per_hour", true, {0.0, 10000.0, true, false, "kits/h"}).value_or(0.0);
+        s.kits_per_hour = r_.number(*j, p, "kits_per_hour", true,
+                                    {0.0, lim::max_kits_per_hour, true, false, "kits/h", lim::plausibility_note}).value_or(0.0);
     }
     // Arrays the parser handed over element by element are empty here; the others (or a wrong type) are read now.
     for (const char* key : {"zones", "racks", "parts", "slots", "routes"})
@@ -66,7 +75,7 @@ class StoreReader::Impl {
       load_reference_box(*j, JsonPath(root, "reference_box"), s);
     if (const json* j = r_.member(doc, root, "limit_frequencies", false)) {
       const JsonPath p(root, "limit_frequencies");
-      if (r_.array(*j, p, 1, "frequencies")) {
+      if (r_.array(*j, p, 1, "frequencies") && r_.at_most(*j, p, lim::max_limit_frequencies, "frequencies")) {
         s.limit_frequencies_per_min.clear();
         for (std::size_t i = 0; i < j->size(); ++i) {
           const json& f = (*j)[i];
@@ -86,7 +95,7 @@ class StoreReader::Impl {
   std::optional<double> length(const json& j, const JsonPath& p, const char* key, bool required, double min,
                                bool min_exclusive, double max_cm) {
     const double max = Length{max_cm, UnitSystem::metric}.in_units(units_);
-    return r_.number(j, p, key, required, {min, max, min_exclusive, false, len_});
+    return r_.number(j, p, key, required, {min, max, min_exclusive, false, len_, lim::plausibility_note});
   }
 
   std::optional<Shift> load_shift(const json& j, const JsonPath& p) {
@@ -107,7 +116,7 @@ class StoreReader::Impl {
     if (*start == *end) r_.add("invalid_value", JsonPath(p, "end"), &j.at("end"), "must differ from the start");
     if (const json* b = r_.member(j, p, "breaks", false)) {
       const JsonPath bp(p, "breaks");
-      if (r_.array(*b, bp, 0, "breaks"))
+      if (r_.array(*b, bp, 0, "breaks") && r_.at_most(*b, bp, lim::max_breaks, "breaks"))
         for (std::size_t i = 0; i < b->size(); ++i) {
           const JsonPath ip(bp, i);
           if (!r_.object((*b)[i], ip, {"start", "minutes"})) continue;
@@ -141,9 +150,10 @@ class StoreReader::Impl {
     Zone z;
     z.id = r_.string(j, p, "id", true).value_or("");
     r_.set_context("zone \"" + z.id + "\"");
-    z.standing_distance = sourced(j, p, "standing_distance", ZoneDefaults::standing_distance_cm, true, 100.0);
-    z.cart_deck_height = sourced(j, p, "cart_deck_height", ZoneDefaults::cart_deck_height_cm, true, 175.0);
-    z.cart_h = sourced(j, p, "cart_h", ZoneDefaults::cart_h_cm, true, 100.0);
+    z.standing_distance = sourced(j, p, "standing_distance", ZoneDefaults::standing_distance_cm, true,
+                                  lim::max_standing_distance_cm);
+    z.cart_deck_height = sourced(j, p, "cart_deck_height", ZoneDefaults::cart_deck_height_cm, true, 175.0);  // the equation's V domain
+    z.cart_h = sourced(j, p, "cart_h", ZoneDefaults::cart_h_cm, true, lim::max_standing_distance_cm);
     z.turn_angle_deg = sourced(j, p, "turn_angle", ZoneDefaults::turn_angle_deg, false, 180.0);
     z.origin_angle_deg = sourced(j, p, "origin_angle", ZoneDefaults::origin_angle_deg, false, 180.0);
     z.control_at_destination = r_.boolean(j, p, "control_at_destination", false).value_or(false);
@@ -163,17 +173,18 @@ class StoreReader::Impl {
     if (auto k = r_.choice(j, p, "kind", true, {"hand", "truck", "mixed"}))
       rack.kind = *k == "hand" ? RackKind::hand : *k == "truck" ? RackKind::truck : RackKind::mixed;
     rack.zone = r_.string(j, p, "zone", true).value_or("");
-    rack.bay_width = length(j, p, "bay_width", true, 0.0, true, 1000.0).value_or(0.0);
-    rack.shelf_depth = length(j, p, "shelf_depth", true, 0.0, true, 300.0).value_or(0.0);
+    rack.bay_width = length(j, p, "bay_width", true, 0.0, true, lim::max_bay_width_cm).value_or(0.0);
+    rack.shelf_depth = length(j, p, "shelf_depth", true, 0.0, true, lim::max_shelf_depth_cm).value_or(0.0);
     if (const json* b = r_.member(j, p, "bays", true)) {
-      if (!b->is_number_integer() || b->get<long long>() < 1 || b->get<long long>() > 1000)
-        r_.add("out_of_range", JsonPath(p, "bays"), b, "must be a whole number from 1 to 1000");
+      if (!b->is_number_integer() || b->get<long long>() < 1 || b->get<long long>() > lim::max_bays)
+        r_.add("out_of_range", JsonPath(p, "bays"), b,
+               "must be a whole number from 1 to " + std::to_string(lim::max_bays) + std::string(lim::plausibility_note));
       else
         rack.bays = b->get<int>();
     }
     if (const json* lv = r_.member(j, p, "levels", true)) {
       const JsonPath lp(p, "levels");
-      if (r_.array(*lv, lp, 1, "levels")) {
+      if (r_.array(*lv, lp, 1, "levels") && r_.at_most(*lv, lp, lim::max_levels_per_rack, "levels")) {
         std::set<std::string> ids;
         double previous_top = -1.0;
         for (std::size_t i = 0; i < lv->size(); ++i) {
@@ -182,8 +193,8 @@ class StoreReader::Impl {
           if (!r_.object(l, ip, {"id", "surface_height", "clear_height", "access"})) continue;
           Level level;
           level.id = r_.string(l, ip, "id", true).value_or("");
-          level.surface_height = length(l, ip, "surface_height", true, 0.0, false, 1500.0).value_or(0.0);
-          level.clear_height = length(l, ip, "clear_height", true, 0.0, true, 500.0).value_or(0.0);
+          level.surface_height = length(l, ip, "surface_height", true, 0.0, false, lim::max_height_cm).value_or(0.0);
+          level.clear_height = length(l, ip, "clear_height", true, 0.0, true, lim::max_clear_height_cm).value_or(0.0);
           const auto access = r_.choice(l, ip, "access", false, {"hand", "truck"});
           level.access = access ? (*access == "hand" ? LevelAccess::hand : LevelAccess::truck)
                                 : (rack.kind == RackKind::truck ? LevelAccess::truck : LevelAccess::hand);
@@ -219,15 +230,15 @@ class StoreReader::Impl {
     r_.set_context("part \"" + part.id + "\"");
     part.family = r_.string(j, p, "family", true).value_or("");
     part.description = r_.string(j, p, "description", false, false).value_or("");
-    part.unit_weight = r_.number(j, p, "unit_weight", true, {0.0, Mass{2000.0, UnitSystem::metric}.in_units(units_),
-                                                              true, false, mass_})
+    part.unit_weight = r_.number(j, p, "unit_weight", true, {0.0, Mass{lim::max_mass_kg, UnitSystem::metric}.in_units(units_),
+                                                              true, false, mass_, lim::plausibility_note})
                            .value_or(0.0);
     if (const json* b = r_.member(j, p, "box", true)) {
       const JsonPath bp(p, "box");
       if (r_.object(*b, bp, {"width", "depth", "height"})) {
-        part.box.width = length(*b, bp, "width", true, 0.0, true, 500.0).value_or(0.0);
-        part.box.depth = length(*b, bp, "depth", true, 0.0, true, 500.0).value_or(0.0);
-        part.box.height = length(*b, bp, "height", true, 0.0, true, 500.0).value_or(0.0);
+        part.box.width = length(*b, bp, "width", true, 0.0, true, lim::max_box_side_cm).value_or(0.0);
+        part.box.depth = length(*b, bp, "depth", true, 0.0, true, lim::max_box_side_cm).value_or(0.0);
+        part.box.height = length(*b, bp, "height", true, 0.0, true, lim::max_box_side_cm).value_or(0.0);
       }
     }
     const json* c = r_.member(j, p, "coupling", false);
@@ -246,11 +257,14 @@ class StoreReader::Impl {
         part.handhold = hh;
       }
     }
-    part.pieces_per_kit = r_.number(j, p, "pieces_per_kit", false, {0.0, 1000.0, true, false, ""}).value_or(1.0);
-    part.pieces_per_grasp = r_.number(j, p, "pieces_per_grasp", false, {0.0, 1000.0, true, false, ""}).value_or(1.0);
+    part.pieces_per_kit = r_.number(j, p, "pieces_per_kit", false, {0.0, lim::max_pieces, true, false, "", lim::plausibility_note}).value_or(1.0);
+    part.pieces_per_grasp = r_.number(j, p, "pieces_per_grasp", false,
+                                      {0.0, lim::max_pieces, true, false, "", lim::plausibility_note}).value_or(1.0);
     if (const json* pp = r_.member(j, p, "pack_pieces", false)) {
-      if (!pp->is_number_integer() || pp->get<long long>() < 1 || pp->get<long long>() > 100000)
-        r_.add("out_of_range", JsonPath(p, "pack_pieces"), pp, "must be a whole number from 1 to 100000");
+      if (!pp->is_number_integer() || pp->get<long long>() < 1 || pp->get<long long>() > lim::max_pack_pieces)
+        r_.add("out_of_range", JsonPath(p, "pack_pieces"), pp,
+               "must be a whole number from 1 to " + std::to_string(lim::max_pack_pieces) +
+                   std::string(lim::plausibility_note));
       else
         part.pack_pieces = pp->get<int>();
     }
@@ -281,7 +295,7 @@ class StoreReader::Impl {
       slot.position = *pos == "front" ? SlotPosition::front : SlotPosition::back;
     slot.fixed = r_.boolean(j, p, "fixed", false).value_or(false);
     slot.origin_angle_deg = r_.number(j, p, "origin_angle", false, {0.0, 180.0, false, false, "deg"});
-    slot.standing_distance = length(j, p, "standing_distance", false, 0.0, false, 100.0);
+    slot.standing_distance = length(j, p, "standing_distance", false, 0.0, false, lim::max_standing_distance_cm);
     if (!slot.id.empty() && !slot_ids_.insert(slot.id).second)
       r_.add("duplicate_id", JsonPath(p, "id"), &j.at("id"), "slot ids must be unique");
     slot_paths_.push_back(p.str());
@@ -296,7 +310,7 @@ class StoreReader::Impl {
     route.name = r_.string(j, p, "name", false, false).value_or("");
     if (const json* sl = r_.member(j, p, "slots", true)) {
       const JsonPath sp(p, "slots");
-      if (r_.array(*sl, sp, 1, "slots"))
+      if (r_.array(*sl, sp, 1, "slots") && r_.at_most(*sl, sp, lim::max_slots_per_route, "slots"))
         for (std::size_t i = 0; i < sl->size(); ++i) {
           if (!(*sl)[i].is_string()) {
             r_.add("wrong_type", JsonPath(sp, i), &(*sl)[i], "must be a slot id (a string)");
@@ -311,9 +325,9 @@ class StoreReader::Impl {
 
   void load_reference_box(const json& j, const JsonPath& p, Store& s) {
     if (!r_.object(j, p, {"width", "depth", "height", "coupling"})) return;
-    s.reference_box.box.width = length(j, p, "width", true, 0.0, true, 500.0).value_or(0.0);
-    s.reference_box.box.depth = length(j, p, "depth", true, 0.0, true, 500.0).value_or(0.0);
-    s.reference_box.box.height = length(j, p, "height", true, 0.0, true, 500.0).value_or(0.0);
+    s.reference_box.box.width = length(j, p, "width", true, 0.0, true, lim::max_box_side_cm).value_or(0.0);
+    s.reference_box.box.depth = length(j, p, "depth", true, 0.0, true, lim::max_box_side_cm).value_or(0.0);
+    s.reference_box.box.height = length(j, p, "height", true, 0.0, true, lim::max_box_side_cm).value_or(0.0);
     if (auto c = r_.choice(j, p, "coupling", true, {"good", "fair", "poor"})) s.reference_box.coupling = *find_coupling(*c);
     reference_box_given_ = true;
   }

@@ -247,7 +247,8 @@ std::optional<Flow> solve_two_tier(const Network& net, const std::vector<ArcStat
   auto first = moves_first ? run_simplex_priced(net, state, move_tier, nullptr)
                            : run_simplex_priced(net, state, cost_tier, price_hint);
   if (!first) return std::nullopt;
-  const auto& [flow1, pi] = *first;
+  // Named members, not a structured binding: clang before 16 cannot capture a binding in the lambdas below.
+  const std::vector<Cost>& pi = first->second;
   std::vector<ArcState> face = state;
   for (std::size_t a = 0; a < net.arcs.size(); ++a) {
     if (state[a] != ArcState::free) continue;

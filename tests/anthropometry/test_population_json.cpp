@@ -6,6 +6,7 @@
 #include <cstdlib>
 #include <filesystem>
 #include <fstream>
+#include <set>
 #include <sstream>
 
 #include "anthropometry/data_dir.hpp"
@@ -210,4 +211,62 @@ TEST_CASE("the shipped ANSUR II workforce takes overhead grip reach from the 198
   CHECK(body.body->overhead_grip_reach_cm == shipped::percentile(from_1988, "overhead_grip_reach", 5));
   const rackreach::Workforce from_2012 = shipped::workforce("ansur2", 0.3);
   CHECK(body.body->acromial_height_cm == shipped::percentile(from_2012, "acromial_height", 5));
+}
+
+namespace {
+
+struct BadTable {
+  const char* fixture;
+  const char* code;
+  const char* path;
+};
+
+// Every invalid population table fixture, the problem it must give and where (the JSON path; "" for the file).
+const BadTable bad_tables[] = {
+    {"invalid_decreasing_quantiles.json", "out_of_range", "dimensions.stature.male.quantiles[1]"},
+    {"invalid_missing_citation.json", "missing_key", "citation"},
+    {"invalid_not_json.json", "parse_error", ""},
+    {"invalid_percentile_range.json", "out_of_range", "percentiles[2]"},
+    {"invalid_quantile_count.json", "wrong_type", "dimensions.stature.female.quantiles"},
+    {"invalid_units.json", "invalid_value", "dimensions.stature.unit"},
+    {"invalid_unknown_keys.json", "unknown_key", "colour"},
+    {"invalid_negative_sd.json", "out_of_range", "dimensions.stature.female.sd"},
+    {"invalid_subjects_not_whole.json", "out_of_range", "subjects.female"},
+    {"invalid_n_above_subjects.json", "out_of_range", "dimensions.stature.male.n"},
+    {"invalid_title_too_long.json", "too_long", "title"},
+    {"invalid_dimension_not_object.json", "wrong_type", "dimensions.stature"},
+    {"invalid_dimension_key_uppercase.json", "invalid_value", "dimensions.Stature2"},
+    {"invalid_kind.json", "invalid_value", "dimensions.stature.kind"},
+    {"invalid_derived_without_derivation.json", "missing_key", "dimensions.stature.derivation"},
+    {"invalid_format_version.json", "invalid_value", "rackreach_population"},
+    {"invalid_name_pattern.json", "invalid_value", "name"},
+    {"invalid_percentiles_not_increasing.json", "out_of_range", "percentiles[2]"},
+    {"invalid_quantile_not_number.json", "wrong_type", "dimensions.stature.female.quantiles[1]"},
+    {"invalid_missing_male.json", "missing_key", "dimensions.stature.male"},
+    {"invalid_source_file_sha256.json", "invalid_value", "source_files[0].sha256"},
+    {"invalid_method_not_strings.json", "wrong_type", "method[1]"},
+    // A number too large for a double; the second file is the input the fuzz target first crashed on (an uncaught
+    // out_of_range from the parser), kept as it was found.
+    {"invalid_number_overflow.json", "parse_error", ""},
+    {"invalid_number_overflow_in_broken_file.json", "parse_error", ""},
+    {"invalid_nesting_too_deep.json", "too_deep", ""},
+};
+
+}  // namespace
+
+TEST_CASE("every invalid population table gives its code at its path, naming the file", "[anthropometry][file]") {
+  std::set<std::string> listed;
+  for (const BadTable& b : bad_tables) {
+    listed.insert(b.fixture);
+    INFO(b.fixture);
+    const auto ps = problems_of(b.fixture);
+    bool found = false;
+    for (const auto& p : ps) found = found || (p.code == b.code && p.path == b.path);
+    CHECK(found);
+  }
+  for (const auto& entry : std::filesystem::directory_iterator(fixture(""))) {
+    const std::string name = entry.path().filename().string();
+    INFO(name);
+    if (name.rfind("invalid_", 0) == 0) CHECK(listed.count(name) == 1);
+  }
 }

@@ -5,12 +5,16 @@
 #include <sys/wait.h>
 
 #include <catch2/catch.hpp>
+#include <cerrno>
 #include <cstdio>
 #include <cstdlib>
+#include <cstring>
 #include <filesystem>
+#include <fstream>
 #include <nlohmann/json.hpp>
 #include <set>
 #include <string>
+#include <vector>
 
 #include "tests/shared_reference.hpp"
 
@@ -360,4 +364,159 @@ TEST_CASE("Exit codes: usage 2, --fail-above 3, --version, template round trip",
     }
     CHECK(run_cli("check " + quote(tf.string())).exit_code == 0);
   }
+}
+
+namespace {
+
+/// Runs the CLI with its files limited to `limit_blocks` blocks of the shell's `ulimit -f` and SIGXFSZ ignored
+/// (an ignored signal stays ignored across exec), so that a write beyond the limit fails with EFBIG as a write to a
+/// full disk fails with ENOSPC. Standard output goes to /dev/null, which has no size.
+Run run_cli_with_file_size_limit(const std::string& args, int limit_blocks) {
+  const fs::path dir = fs::temp_directory_path() / ("rackreach-cli-test-" + std::to_string(::getpid()));
+  fs::create_directories(dir);
+  const std::string err = (dir / "limited-err.txt").string();
+  const std::string cmd = "ulimit -f " + std::to_string(limit_blocks) + "; trap '' XFSZ; " + quote(RACKREACH_CLI) +
+                          " " + args + " >/dev/null 2>" + quote(err);
+  const int status = std::system(cmd.c_str());
+  Run r;
+  r.exit_code = WIFEXITED(status) ? WEXITSTATUS(status) : -1;
+  r.err = shared_reference::read_text(err).value_or("");
+  return r;
+}
+
+std::size_t files_in(const fs::path& dir) {
+  std::size_t n = 0;
+  for (const auto& e : fs::directory_iterator(dir)) n += e.is_regular_file() ? 1 : 0;
+  return n;
+}
+
+}  // namespace
+
+TEST_CASE("Every bad CSV fixture through rackreach import: exit 1, its file named, nothing written",
+          "[cli][invalid][csv]") {
+  const fs::path csv = shared_reference::repo_path("tests/data/csv");
+  const std::string base = quote(shared_reference::repo_path("tests/data/csv/import_base.rackreach.json"));
+  const std::string good_parts = quote((csv / "parts_marlow_valley.csv").string());
+  const std::string good_slots = quote((csv / "slots_marlow_valley.csv").string());
+  const fs::path out = fs::temp_directory_path() / ("rackreach-import-" + std::to_string(::getpid()) + ".json");
+  // The good pair imports into the base project: the exits below come from the bad files.
+  fs::remove(out);
+  const Run good = run_cli("import " + base + " --parts " + good_parts + " --slots " + good_slots + " --out " +
+                           quote(out.string()));
+  INFO(good.err);
+  REQUIRE(good.exit_code == 0);
+  REQUIRE(fs::exists(out));
+  fs::remove(out);
+  int count = 0;
+  for (const auto& entry : fs::directory_iterator(csv)) {
+    const std::string name = entry.path().filename().string();
+    if (entry.path().extension() != ".csv" || name.find("marlow_valley") != std::string::npos) continue;
+    ++count;
+    INFO(name);
+    const bool parts = name.rfind("parts_", 0) == 0;
+    const std::string file = quote(entry.path().string());
+    const Run r = run_cli("import " + base + " --parts " + (parts ? file : good_parts) + " --slots " +
+                          (parts ? good_slots : file) + " --out " + quote(out.string()));
+    INFO(r.err);
+    CHECK(r.exit_code == 1);
+    CHECK_THAT(r.err, Catch::Matchers::Contains(entry.path().string()));
+    CHECK_THAT(r.err, Catch::Matchers::Contains("["));
+    CHECK_FALSE(fs::exists(out));
+  }
+  CHECK(count >= 40);
+}
+
+TEST_CASE("Every bad population table through the CLI: exit 1, its file named, nothing written",
+          "[cli][invalid][population]") {
+  const fs::path tables = shared_reference::repo_path("tests/anthropometry/data");
+  const fs::path dir = fs::temp_directory_path() / ("rackreach-population-" + std::to_string(::getpid()));
+  fs::create_directories(dir);
+  const fs::path out = dir / "review.json";
+  auto project_with = [&](const std::string& population) {
+    json p = json::parse(*shared_reference::read_text(shared_reference::repo_path("tests/data/invalid_negative_load.json")));
+    p["jobs"][0]["tasks"][0]["load"] = 10;
+    p["jobs"][0]["tasks"][0]["shelf"] = {{"grip_depth", 20}};  // a reach check, which needs the workforce
+    p["workforce"] = {{"population", population}};
+    const fs::path f = dir / "project.rackreach.json";
+    std::ofstream(f) << p.dump(2);
+    return f.string();
+  };
+  // The shipped table and a good table of a user's: exit 0 (so the exits below come from the bad tables).
+  fs::remove(out);
+  const Run good = run_cli("assess " + quote(project_with("ansur2")) + " --format json --out " + quote(out.string()));
+  INFO(good.err);
+  REQUIRE(good.exit_code == 0);
+  REQUIRE(fs::exists(out));
+  CHECK(run_cli("population show " + quote((tables / "user_table_5_50_95.json").string())).exit_code == 0);
+  int count = 0;
+  for (const auto& entry : fs::directory_iterator(tables)) {
+    const std::string name = entry.path().filename().string();
+    if (name.rfind("invalid_", 0) != 0) continue;
+    ++count;
+    INFO(name);
+    fs::remove(out);
+    const Run r = run_cli("assess " + quote(project_with(entry.path().string())) + " --format json --out " +
+                          quote(out.string()));
+    INFO(r.err);
+    CHECK(r.exit_code == 1);
+    CHECK_THAT(r.err, Catch::Matchers::Contains(entry.path().string()));
+    CHECK_FALSE(fs::exists(out));
+    const Run show = run_cli("population show " + quote(entry.path().string()));
+    CHECK(show.exit_code == 1);
+    CHECK_THAT(show.err, Catch::Matchers::Contains(entry.path().string()));
+  }
+  CHECK(count >= 20);
+  fs::remove_all(dir);
+}
+
+TEST_CASE("Every file the CLI writes survives a failing write: the old file byte for byte, no temporary file",
+          "[cli][atomic][crash]") {
+  const std::string sample = quote(shared_reference::repo_path("sample_tasks/kitting-store.rackreach.json"));
+  const fs::path dir = fs::temp_directory_path() / ("rackreach-efbig-" + std::to_string(::getpid()));
+  fs::remove_all(dir);
+  fs::create_directories(dir);
+  const fs::path target = dir / "previous.out";
+  const std::string old = "the previous file, which must survive\n";
+  const std::string t = quote(target.string());
+  const fs::path csv = dir / "csv";
+  fs::create_directories(csv);
+  REQUIRE(run_cli("export-csv " + sample + " --parts " + quote((csv / "parts.csv").string()) + " --slots " +
+                  quote((csv / "slots.csv").string()))
+              .exit_code == 0);
+  const std::string parts = quote((csv / "parts.csv").string()), slots = quote((csv / "slots.csv").string());
+  // Each command writes more than the limit of 2 blocks (1 or 2 kB, as the shell counts) to `target`.
+  const std::vector<std::string> commands = {
+      "assess " + sample + " --format json --out " + t,
+      "assess " + sample + " --format html --out " + t,
+      "assess " + sample + " --format csv --out " + t,
+      "assess " + sample + " --format table --out " + t,
+      "limits " + sample + " --format json --out " + t,
+      "import " + sample + " --parts " + parts + " --slots " + slots + " --out " + t,
+      "export-csv " + sample + " --parts " + t + " --slots " + quote((dir / "slots-not-reached.csv").string()),
+      "reslot " + sample + " --out " + t,
+      "reslot " + sample + " --out " + quote((dir / "reslot.json").string()) + " --costs-out " + t,
+  };
+  for (const std::string& c : commands) {
+    INFO(c);
+    std::ofstream(target, std::ios::binary | std::ios::trunc) << old;
+    const Run r = run_cli_with_file_size_limit(c, 2);
+    INFO(r.err);
+    CHECK(r.exit_code != 0);
+    CHECK_THAT(r.err, Catch::Matchers::Contains(std::strerror(EFBIG)));
+    CHECK(shared_reference::read_text(target.string()).value_or("") == old);
+    for (const auto& e : fs::directory_iterator(dir))
+      CHECK(e.path().filename().string().find(".tmp-") == std::string::npos);
+    fs::remove(dir / "reslot.json");
+  }
+  // Without the limit every one of them writes its file (so the failures above were the writes').
+  for (const std::string& c : commands) {
+    INFO(c);
+    std::ofstream(target, std::ios::binary | std::ios::trunc) << old;
+    const Run r = run_cli(c);
+    INFO(r.err);
+    CHECK(r.exit_code == 0);
+    CHECK(shared_reference::read_text(target.string()).value_or("") != old);
+  }
+  CHECK(files_in(dir) >= 1);
+  fs::remove_all(dir);
 }

@@ -83,6 +83,15 @@ const BadFixture bad_fixtures[] = {
     {"slots_standing_distance_above_100_cm.csv", Kind::slots, "out_of_range",
      "line 2, column 5 (standing_distance_mm)"},
     {"slots_unknown_part.csv", Kind::store, "unknown_reference", "line 3, column 2 (part_id)"},
+    // Numbers that are not finite, and plausibility limits (common practice, Rackreach's own; input_limits.hpp).
+    {"parts_weight_infinite.csv", Kind::parts, "wrong_type", "line 2, column 4 (weight_kg)"},
+    {"parts_weight_overflow.csv", Kind::parts, "wrong_type", "line 2, column 4 (weight_kg)"},
+    {"parts_weight_5000_kg.csv", Kind::parts, "out_of_range", "line 2, column 4 (weight_kg)"},
+    {"slots_standing_distance_40_m.csv", Kind::slots, "out_of_range", "line 2, column 5 (standing_distance_m)"},
+    {"slots_bay_above_a_million.csv", Kind::slots, "out_of_range", "line 2, column 5 (bay)"},
+    // Size limits: the file is refused as a whole.
+    {"parts_description_too_long.csv", Kind::parts, "too_long", "line 2, column 3"},
+    {"parts_too_many_columns.csv", Kind::parts, "too_many", "line 1, column 101"},
 };
 
 const Part* find_part(const std::vector<Part>& parts, const std::string& id) {
