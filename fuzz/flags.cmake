@@ -6,5 +6,5 @@ if(NOT CMAKE_CXX_COMPILER_ID STREQUAL "Clang")
   message(FATAL_ERROR "RACKREACH_FUZZ needs clang (libFuzzer): configure with -DCMAKE_CXX_COMPILER=clang++")
 endif()
 add_compile_options(-fsanitize=fuzzer-no-link,address,undefined -fno-sanitize-recover=undefined
-                    -fno-omit-frame-pointer -g)
+                    -fno-omit-frame-pointer -gline-tables-only)  # line numbers in reports; full -g costs build time
 add_link_options(-fsanitize=address,undefined)

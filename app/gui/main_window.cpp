@@ -12,10 +12,12 @@
 #include <QHBoxLayout>
 #include <QHeaderView>
 #include <QInputDialog>
+#include <QLayout>
 #include <QLabel>
 #include <QListWidget>
 #include <QMenuBar>
 #include <QMessageBox>
+#include <QPointer>
 #include <QPushButton>
 #include <QScrollArea>
 #include <QSettings>
@@ -252,11 +254,20 @@ MainWindow::MainWindow(bool remember, QWidget* parent) : QMainWindow(parent), re
 }
 
 MainWindow::~MainWindow() {
-  // The model is destroyed before the widgets (it is a member; they are children): its undo stack's last signals
-  // (it clears itself) must reach no one.
+  // The undo stack's last signals (it clears itself when the model dies) must reach no one.
   autosave_timer_->stop();
   QObject::disconnect(model_.undo_stack(), nullptr, nullptr, nullptr);
   QObject::disconnect(&model_, nullptr, nullptr, nullptr);
+  // QWidget's destructor would delete the children only after this class's members (the project model, the
+  // action map) are gone, and in the order they were made, so an item model could die before the views that
+  // read it. Delete them here while everything they use still lives: the widgets (views, menus) first, then the
+  // item models, actions and timers. QPointer: a child may delete a sibling itself.
+  for (const bool widgets : {true, false}) {
+    QList<QPointer<QObject>> kids;
+    for (QObject* k : children())
+      if (k->isWidgetType() == widgets && !qobject_cast<QLayout*>(k)) kids << k;
+    for (const QPointer<QObject>& k : kids) delete k.data();
+  }
 }
 
 void MainWindow::build_menus() {
