@@ -3,21 +3,6 @@
 
 namespace rackreach::report {
 
-std::string html_escape(const std::string& s) {
-  std::string o;
-  o.reserve(s.size());
-  for (char ch : s) {
-    switch (ch) {
-      case '&': o += "&amp;"; break;
-      case '<': o += "&lt;"; break;
-      case '>': o += "&gt;"; break;
-      case '"': o += "&quot;"; break;
-      default: o += ch;
-    }
-  }
-  return o;
-}
-
 namespace {
 
 class HtmlWriter {

@@ -8,6 +8,7 @@
 #include <utility>
 
 #include "app/report/report_document.hpp"
+#include "engine/io/text_columns.hpp"
 
 namespace rackreach::report {
 
@@ -22,6 +23,6 @@ struct HtmlOptions {
 
 std::string render_html(const ReportDocument& doc, const HtmlOptions& options);
 
-std::string html_escape(const std::string& s);
+using text::html_escape;  // one escaper for every HTML output
 
 }  // namespace rackreach::report

@@ -331,8 +331,7 @@ std::string write_assessment_html(const Project& project, const ProjectAssessmen
   ProjectAssessment jobs_only = a;
   jobs_only.store.reset();
   std::string jobs_text = a.jobs.empty() ? std::string() : write_assessment_table(project, jobs_only, h);
-  std::string escaped;
-  for (char c : jobs_text) escaped += c == '<' ? "&lt;" : c == '>' ? "&gt;" : c == '&' ? "&amp;" : std::string(1, c);
+  const std::string escaped = text::html_escape(jobs_text);
   std::string page = a.store ? write_review_html(project, *a.store, h.input_name)
                              : "<!DOCTYPE html>\n<html lang=\"en\"><head><meta charset=\"utf-8\"><title>Rackreach lift "
                                "assessment</title></head><body>\n<p>" + std::string(caution_text) + "</p>\n</body></html>\n";

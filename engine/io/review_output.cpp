@@ -13,6 +13,7 @@ namespace rackreach {
 namespace {
 
 using text::fixed;
+using text::html_escape;
 using text::pad_left;
 using text::pad_right;
 std::string ofixed(const std::optional<double>& x, int decimals) { return text::fixed_or_dash(x, decimals); }
@@ -39,20 +40,6 @@ void write_point_short(JsonWriter& w, const PointResult& p) {
   w.field("fm", p.fm.value).field("cm", p.cm.value).field("rwl", p.rwl).field("firwl", p.firwl);
   w.field("strwl", p.strwl).field("li", p.li).field("fili", p.fili).field("stli", p.stli);
   w.end_object();
-}
-
-std::string html_escape(const std::string& s) {
-  std::string o;
-  for (char c : s) {
-    switch (c) {
-      case '&': o += "&amp;"; break;
-      case '<': o += "&lt;"; break;
-      case '>': o += "&gt;"; break;
-      case '"': o += "&quot;"; break;
-      default: o += c;
-    }
-  }
-  return o;
 }
 
 }  // namespace

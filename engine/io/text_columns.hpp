@@ -1,6 +1,6 @@
 // SPDX-License-Identifier: MIT
 #pragma once
-// Fixed-decimal numbers and padded columns for the text tables of the outputs.
+// Fixed-decimal numbers and padded columns for the text tables of the outputs, and text escaped for HTML.
 
 #include <cstdio>
 #include <optional>
@@ -20,6 +20,22 @@ inline std::string pad_left(const std::string& s, std::size_t w) {
 }
 inline std::string pad_right(const std::string& s, std::size_t w) {
   return s.size() >= w ? s : s + std::string(w - s.size(), ' ');
+}
+
+/// `s` with &, <, > and " escaped, for HTML text and attribute values.
+inline std::string html_escape(const std::string& s) {
+  std::string o;
+  o.reserve(s.size());
+  for (char ch : s) {
+    switch (ch) {
+      case '&': o += "&amp;"; break;
+      case '<': o += "&lt;"; break;
+      case '>': o += "&gt;"; break;
+      case '"': o += "&quot;"; break;
+      default: o += ch;
+    }
+  }
+  return o;
 }
 
 }  // namespace rackreach::text

@@ -33,6 +33,8 @@ except ImportError:
 SCHEMA_CANNOT_STATE = {
     "invalid_not_json": ("parse_error", "jobs[0]", "not JSON: no schema applies to it"),
     "invalid_nan_value": ("parse_error", "jobs[0].tasks[0].origin.h", "NaN is not JSON"),
+    "invalid_number_overflow_in_broken_file": ("parse_error", "jobs[0].tasks[0].load",
+                                               "a number beyond a double in a file that is not JSON either"),
     "invalid_duplicate_job_ids": ("duplicate_id", "jobs[1].id", "unique ids across array items"),
     "invalid_duplicate_task_ids": ("duplicate_id", "jobs[0].tasks[1].id", "unique ids across array items"),
     "invalid_max_load_below_load": ("out_of_range", "jobs[0].tasks[0].max_load", "one field against another"),
