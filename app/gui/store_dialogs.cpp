@@ -183,21 +183,33 @@ std::optional<Rack> RackDialog::read(QString& why) const {
   return r;
 }
 
+namespace {
+
+/// Accepts `dialog` with `candidate` as its result when the project file's loader would accept the store; else
+/// shows the loader's problems in `message` and keeps the dialog open.
+bool accept_if_loadable(QDialog& dialog, const ProjectModel& model, Store candidate, Store& result, QLabel* message) {
+  const std::vector<Problem> problems = model.check_store(candidate);
+  if (!problems.empty()) {
+    message->setText(QDialog::tr("Not accepted (the project file's rules): %1")
+                         .arg(q(ProjectModel::describe_problems(problems))));
+    return false;
+  }
+  result = std::move(candidate);
+  message->clear();
+  dialog.accept();
+  return true;
+}
+
+}  // namespace
+
 bool RackDialog::try_accept() {
   QString why;
   const std::optional<Rack> rack = read(why);
   if (rack) {
-    Store s = model_.store_with_rack(index_, *rack);
-    const std::vector<Problem> problems = model_.check_store(s);
-    if (problems.empty()) {
-      result_ = std::move(s);
-      message_->clear();
-      accept();
-      return true;
-    }
-    why = tr("Not accepted (the project file's rules): %1").arg(q(ProjectModel::describe_problems(problems)));
+    if (accept_if_loadable(*this, model_, model_.store_with_rack(index_, *rack), result_, message_)) return true;
+  } else {
+    message_->setText(why);
   }
-  message_->setText(why);
   return false;
 }
 
@@ -287,17 +299,10 @@ bool ZoneDialog::try_accept() {
       z.*(spec.first) = {*v, ValueSource::file};
   }
   if (why.isEmpty()) {
-    Store s = model_.store_with_zone(index_, z);
-    const std::vector<Problem> problems = model_.check_store(s);
-    if (problems.empty()) {
-      result_ = std::move(s);
-      message_->clear();
-      accept();
-      return true;
-    }
-    why = tr("Not accepted (the project file's rules): %1").arg(q(ProjectModel::describe_problems(problems)));
+    if (accept_if_loadable(*this, model_, model_.store_with_zone(index_, z), result_, message_)) return true;
+  } else {
+    message_->setText(why);
   }
-  message_->setText(why);
   return false;
 }
 
